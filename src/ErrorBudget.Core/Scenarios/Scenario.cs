@@ -1,0 +1,24 @@
+namespace ErrorBudget.Core.Scenarios;
+
+/// <summary>
+/// A validated scenario: everything a run needs, in SI units inside (metres, seconds, radians where
+/// a property name says so; degrees only where the name ends in Deg). Built only by
+/// <see cref="ScenarioLoader"/> or by tests; immutable.
+/// </summary>
+public sealed record Scenario(
+    RunSettings Run,
+    IReadOnlyList<ShellSpec> Shells,
+    GridSpec Grid,
+    ClockSpec Clock,
+    OrbitErrorSpec Orbit,
+    UserEnvironmentSpec User,
+    AssumedModelSpec Assumed)
+{
+    /// <summary>The scenario file's text as the user wrote it (kept in every output's metadata).</summary>
+    public string SourceText { get; init; } = "";
+
+    /// <summary>The file name the scenario came from, for messages.</summary>
+    public string SourceName { get; init; } = "scenario";
+
+    public int TotalSatellites => Shells.Sum(s => s.Satellites);
+}
