@@ -2,5 +2,6 @@ namespace ErrorBudget.Cli;
 
 internal static class Program
 {
-    private static int Main(string[] args) => args.Length >= 0 ? 0 : 1;
+    private static async Task<int> Main(string[] args) =>
+        await CliApp.RunAsync(args, Console.Out, Console.Error, interactiveConsole: true, CancellationToken.None).ConfigureAwait(false);
 }

@@ -1,0 +1,101 @@
+using System.CommandLine;
+using System.Diagnostics;
+using System.Globalization;
+using System.Text.Json;
+using ErrorBudget.Cli.Console;
+using ErrorBudget.Core.Scenarios;
+using ErrorBudget.Core.Simulation;
+using ErrorBudget.Results;
+
+namespace ErrorBudget.Cli.Commands;
+
+/// <summary>
+/// `errorbudget bench`: runs the fixed workload W1 (scenarios/w1.toml, embedded in the tool) and
+/// reports user-solutions per second (users x epochs x trials / simulation wall time), the time to
+/// write the result set, and the peak memory of the process.
+/// </summary>
+internal static class BenchCommand
+{
+    private const string WorkloadName = "w1";
+
+    public static Command Create(CliContext context)
+    {
+        var threads = CommonOptions.Threads();
+        var trials = CommonOptions.Trials();
+        var json = new Option<bool>("--json") { Description = "Print one JSON object (for build servers) instead of text." };
+        var quiet = CommonOptions.Quiet();
+        var command = new Command("bench", "Run the fixed benchmark workload W1 and report throughput and peak memory.")
+        {
+            threads, trials, json, quiet,
+        };
+        command.SetAction(async (pr, ct) => (int)await ExecuteAsync(
+            context, pr.GetValue(threads), pr.GetValue(trials), pr.GetValue(json), pr.GetValue(quiet), ct).ConfigureAwait(false));
+        return command;
+    }
+
+    internal static Scenario LoadWorkload()
+    {
+        using var stream = typeof(BenchCommand).Assembly.GetManifestResourceStream("ErrorBudget.Cli.Workloads.w1.toml")
+            ?? throw new InvalidOperationException("the embedded benchmark workload is missing");
+        using var reader = new StreamReader(stream);
+        return ScenarioLoader.Load(reader.ReadToEnd(), "w1.toml");
+    }
+
+    private static async Task<ExitCode> ExecuteAsync(CliContext context, int threads, int? trials, bool json, bool quiet, CancellationToken ct)
+    {
+        if (CommonOptions.Validate(trials, null, threads) is string bad)
+        {
+            await context.Error.WriteLineAsync($"error: {bad}").ConfigureAwait(false);
+            return ExitCode.BadInput;
+        }
+
+        var scenario = LoadWorkload();
+        if (trials is int n)
+        {
+            scenario = scenario with { Run = scenario.Run with { Trials = n } };
+        }
+
+        var options = new RunOptions { Threads = threads, ToolVersion = CliApp.ToolVersion };
+        try
+        {
+            var clock = Stopwatch.StartNew();
+            RunResult result = await ProgressDisplay.RunAsync(
+                context, quiet || json, "bench w1", p => MonteCarloEngine.RunAsync(scenario, options with { Progress = p }, ct)).ConfigureAwait(false);
+            double simulate = clock.Elapsed.TotalSeconds;
+            string folder = Path.Combine(Path.GetTempPath(), "errorbudget-bench-" + Guid.NewGuid().ToString("N"));
+            clock.Restart();
+            await ResultSetWriter.WriteAsync(result, folder, force: false, ct).ConfigureAwait(false);
+            double write = clock.Elapsed.TotalSeconds;
+            Directory.Delete(folder, recursive: true);
+
+            long users = result.Cells.Count;
+            long solutions = users * result.Epochs.Count * result.Metadata.Trials;
+            var figures = new BenchFigures(
+                WorkloadName, users, result.Epochs.Count, result.Metadata.Trials, solutions, solutions / simulate,
+                simulate, write, Process.GetCurrentProcess().PeakWorkingSet64, threads, Environment.ProcessorCount, CliApp.ToolVersion);
+            if (json)
+            {
+                await context.Output.WriteLineAsync(JsonSerializer.Serialize(figures, BenchJson.Default.BenchFigures)).ConfigureAwait(false);
+            }
+            else
+            {
+                await WriteTextAsync(context.Output, figures).ConfigureAwait(false);
+            }
+
+            return ExitCode.Done;
+        }
+        catch (OperationCanceledException)
+        {
+            await context.Error.WriteLineAsync("cancelled").ConfigureAwait(false);
+            return ExitCode.Failure;
+        }
+    }
+
+    private static Task WriteTextAsync(TextWriter w, BenchFigures f) => w.WriteLineAsync(string.Create(CultureInfo.InvariantCulture, $"""
+        workload                 {f.Workload}: {f.Users} users x {f.Epochs} epochs x {f.Trials} trials = {f.UserSolutions:N0} user-solutions
+        user-solutions per second {f.UserSolutionsPerSecond / 1e6:0.0} M ({f.Threads} threads on {f.ProcessorCount} cores)
+        simulation               {f.SimulationSeconds:0.00} s
+        writing the result set   {f.WriteSeconds:0.00} s
+        peak memory              {f.PeakMemoryBytes / 1048576.0:0} MiB
+        """));
+}

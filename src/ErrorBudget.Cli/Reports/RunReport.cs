@@ -1,0 +1,36 @@
+using System.Globalization;
+using ErrorBudget.Core;
+using ErrorBudget.Core.Simulation;
+
+namespace ErrorBudget.Cli.Reports;
+
+/// <summary>The short text report printed after a run (stdout).</summary>
+internal static class RunReport
+{
+    public static async Task WriteAsync(TextWriter w, RunResult r, string folder)
+    {
+        var g = r.Global;
+        var s = r.Scenario;
+        var c = CultureInfo.InvariantCulture;
+        await w.WriteLineAsync(string.Create(c, $"scenario   {s.SourceName} (sha256 {r.Metadata.ScenarioHash[..12]}), seed {r.Metadata.Seed}, {r.Metadata.Trials} trials")).ConfigureAwait(false);
+        await w.WriteLineAsync(string.Create(c, $"simulated  {r.Cells.Count} cells x {r.Epochs.Count} epochs x {r.Metadata.Trials} trials = {g.Samples:N0} position samples in {r.Metadata.RunSeconds:0.0} s on {r.Metadata.Threads} threads")).ConfigureAwait(false);
+        await w.WriteLineAsync(string.Create(c, $"unavailable {g.UnavailableFraction * 100:0.###} % of the area-weighted user-epochs (fewer than 4 satellites)")).ConfigureAwait(false);
+        await w.WriteLineAsync("service area (area-weighted, pooled)   p50       p95       p99       p99.9").ConfigureAwait(false);
+        await w.WriteLineAsync(Row("  HPE (m)", g.Hpe)).ConfigureAwait(false);
+        await w.WriteLineAsync(Row("  VPE (m)", g.Vpe)).ConfigureAwait(false);
+        await w.WriteLineAsync(Worst("worst cell by HPE p95", g.WorstHpe)).ConfigureAwait(false);
+        await w.WriteLineAsync(Worst("worst cell by VPE p95", g.WorstVpe)).ConfigureAwait(false);
+        await w.WriteLineAsync($"result set {folder}").ConfigureAwait(false);
+        await w.WriteLineAsync($"caution    {Caution.Text}").ConfigureAwait(false);
+    }
+
+    private static string Row(string label, PercentileSet p) => string.Create(
+        CultureInfo.InvariantCulture,
+        $"{label,-39}{F(p.P50),-10}{F(p.P95),-10}{F(p.P99),-10}{F(p.P999)}");
+
+    private static string Worst(string label, WorstCell w) => w.CellIndex < 0
+        ? $"{label}: none (no cell had samples)"
+        : string.Create(CultureInfo.InvariantCulture, $"{label}: {w.P95Meters:0.###} m at lat {w.LatDeg:0.##}, lon {w.LonDeg:0.##} (cell {w.CellIndex})");
+
+    private static string F(double v) => double.IsNaN(v) ? "-" : v.ToString("0.###", CultureInfo.InvariantCulture);
+}

@@ -1,0 +1,230 @@
+using System.Collections.Concurrent;
+using System.Diagnostics;
+using System.Security.Cryptography;
+using System.Text;
+using System.Threading.Tasks.Dataflow;
+using ErrorBudget.Core.Errors;
+using ErrorBudget.Core.Geodesy;
+using ErrorBudget.Core.Scenarios;
+using ErrorBudget.Core.Statistics;
+
+namespace ErrorBudget.Core.Simulation;
+
+/// <summary>
+/// Runs a scenario as a TPL Dataflow pipeline:
+/// (epoch, trial block) -> satellite states and satellite-level errors (parallel, bounded)
+/// -> tile jobs -> parallel tile kernels -> per-cell and per-epoch accumulators -> results.
+/// Bounded capacities give back-pressure, so memory holds a few epochs' satellite errors at a time
+/// whatever the number of epochs and trials.
+/// </summary>
+public static class MonteCarloEngine
+{
+    public static async Task<RunResult> RunAsync(Scenario scenario, RunOptions options, CancellationToken ct)
+    {
+        ArgumentNullException.ThrowIfNull(scenario);
+        ArgumentNullException.ThrowIfNull(options);
+        var started = DateTimeOffset.UtcNow;
+        var clock = Stopwatch.StartNew();
+        var setup = new SimulationSetup(scenario, options);
+        double accuracy = SimulationSetup.SketchAccuracy;
+        var cells = new CellAccumulator[setup.Grid.Count];
+        for (int i = 0; i < cells.Length; i++)
+        {
+            cells[i] = new CellAccumulator(accuracy);
+        }
+
+        var kernel = new TileKernel(setup, cells);
+        var sampler = new SatelliteErrorSampler(scenario, setup.Seed);
+        var epochs = new EpochResult[setup.Epochs];
+        var scratchPool = new ConcurrentBag<TileScratch>();
+        var workPool = new ConcurrentBag<EpochWork>();
+        var accumulators = new ConcurrentDictionary<int, EpochAccumulator>();
+        long done = 0;
+        int threads = Math.Max(1, options.Threads);
+
+        var prepare = new TransformBlock<(int Epoch, int Block), EpochWork>(
+            item =>
+            {
+                EpochWork w = workPool.TryTake(out var pooled) ? pooled : new EpochWork(scenario.TotalSatellites, setup.BlockCapacity);
+                PrepareEpoch(setup, sampler, item.Epoch, item.Block, w);
+                w.Accumulator = accumulators.GetOrAdd(item.Epoch, _ => new EpochAccumulator(accuracy, setup.Blocks * setup.Tiles.Count));
+                w.PendingTiles = setup.Tiles.Count;
+                return w;
+            },
+            new ExecutionDataflowBlockOptions { MaxDegreeOfParallelism = threads, BoundedCapacity = threads + 1, CancellationToken = ct });
+
+        var split = new TransformManyBlock<EpochWork, TileJob>(
+            w => setup.Tiles.Select(t => new TileJob(w, t)),
+            new ExecutionDataflowBlockOptions { BoundedCapacity = 2, CancellationToken = ct });
+
+        var run = new ActionBlock<TileJob>(
+            job =>
+            {
+                TileScratch scratch = scratchPool.TryTake(out var s) ? s : new TileScratch(scenario.TotalSatellites, setup.BlockCapacity, accuracy);
+                kernel.Process(job, scratch);
+                EpochAccumulator acc = job.Work.Accumulator;
+                int epoch = job.Work.Epoch;
+                lock (acc.Gate)
+                {
+                    acc.Hpe.Merge(scratch.Hpe);
+                    acc.Vpe.Merge(scratch.Vpe);
+                    acc.Pdop.Merge(scratch.Pdop);
+                    acc.WeightSum += scratch.WeightSum;
+                    acc.UnavailableWeight += scratch.UnavailableWeight;
+                    acc.SatsInViewWeighted += scratch.SatsInViewWeighted;
+                    acc.Samples += scratch.Samples;
+                }
+
+                scratchPool.Add(scratch);
+                // The work item goes back to the pool only after its last tile: nothing reads it after that.
+                if (Interlocked.Decrement(ref job.Work.PendingTiles) == 0)
+                {
+                    workPool.Add(job.Work);
+                }
+
+                if (acc.CompleteOne())
+                {
+                    epochs[epoch] = FinishEpoch(setup, epoch, acc);
+                    accumulators.TryRemove(epoch, out _);
+                }
+
+                options.Progress?.Invoke(Interlocked.Increment(ref done), setup.TotalJobs);
+            },
+            new ExecutionDataflowBlockOptions { MaxDegreeOfParallelism = threads, BoundedCapacity = threads * 4, CancellationToken = ct });
+
+        var link = new DataflowLinkOptions { PropagateCompletion = true };
+        prepare.LinkTo(split, link);
+        split.LinkTo(run, link);
+
+        for (int e = 0; e < setup.Epochs; e++)
+        {
+            for (int b = 0; b < setup.Blocks; b++)
+            {
+                if (!await prepare.SendAsync((e, b), ct).ConfigureAwait(false))
+                {
+                    break;
+                }
+            }
+        }
+
+        prepare.Complete();
+        try
+        {
+            await run.Completion.ConfigureAwait(false);
+        }
+        catch (TaskCanceledException) when (ct.IsCancellationRequested)
+        {
+            ct.ThrowIfCancellationRequested();
+        }
+
+        ct.ThrowIfCancellationRequested();
+        clock.Stop();
+        var cellResults = BuildCells(setup, cells);
+        var global = BuildGlobal(setup, cells, cellResults);
+        var metadata = new RunMetadata(
+            HashOf(scenario.SourceText), setup.Seed, setup.Trials, options.ToolVersion, threads, started, clock.Elapsed.TotalSeconds);
+        return new RunResult(scenario, metadata, cellResults, epochs, global);
+    }
+
+    /// <summary>SHA-256 of the scenario text, lower-case hex: the identity of a scenario in every output.</summary>
+    public static string HashOf(string text) =>
+        Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(text)));
+
+    private static void PrepareEpoch(SimulationSetup setup, SatelliteErrorSampler sampler, int epoch, int block, EpochWork w)
+    {
+        double t = setup.Scenario.Run.EpochTimeSeconds(epoch);
+        w.Epoch = epoch;
+        w.TimeSeconds = t;
+        w.RotationAngleRad = setup.StartRotationAngleRad + Wgs84.EarthRotationRateRadPerSecond * t;
+        w.FirstTrial = block * setup.BlockCapacity;
+        w.BlockTrials = Math.Min(setup.BlockCapacity, setup.Trials - w.FirstTrial);
+        w.IsFirstBlock = block == 0;
+        setup.Constellation.Propagate(t, setup.StartRotationAngleRad, w.States);
+        sampler.Sample(epoch, t, w.RotationAngleRad, w.States, w.FirstTrial, w.BlockTrials, w.SatelliteErrors);
+    }
+
+    private static EpochResult FinishEpoch(SimulationSetup setup, int epoch, EpochAccumulator acc)
+    {
+        double t = setup.Scenario.Run.EpochTimeSeconds(epoch);
+        double total = Math.Max(1, acc.WeightSum);
+        return new EpochResult(
+            epoch,
+            t,
+            setup.Scenario.Run.StartUtc.AddSeconds(t),
+            acc.Samples,
+            acc.UnavailableWeight / total,
+            acc.SatsInViewWeighted / total,
+            acc.Pdop.IsEmpty ? double.NaN : acc.Pdop.Quantile(0.50),
+            acc.Pdop.IsEmpty ? double.NaN : acc.Pdop.Quantile(0.95),
+            PercentileReport.From(acc.Hpe, acc.Samples),
+            PercentileReport.From(acc.Vpe, acc.Samples));
+    }
+
+    private static CellResult[] BuildCells(SimulationSetup setup, CellAccumulator[] cells)
+    {
+        var rows = new CellResult[cells.Length];
+        for (int i = 0; i < cells.Length; i++)
+        {
+            var a = cells[i];
+            var g = setup.Grid.Cells[i];
+            long available = a.Epochs - a.UnavailableEpochs;
+            rows[i] = new CellResult(
+                i,
+                g.LatDeg,
+                g.LonDeg,
+                g.AreaWeight,
+                a.Samples,
+                a.Epochs == 0 ? double.NaN : (double)a.UnavailableEpochs / a.Epochs,
+                a.Epochs == 0 ? double.NaN : (double)a.SatsInViewSum / a.Epochs,
+                PercentileReport.Percentile(a.Pdop, available, 0.50),
+                PercentileReport.Percentile(a.Pdop, available, 0.95),
+                PercentileReport.Percentile(a.Hdop, available, 0.95),
+                PercentileReport.Percentile(a.Vdop, available, 0.95),
+                PercentileReport.From(a.Hpe, a.Samples),
+                PercentileReport.From(a.Vpe, a.Samples));
+        }
+
+        return rows;
+    }
+
+    private static GlobalFigures BuildGlobal(SimulationSetup setup, CellAccumulator[] cells, CellResult[] rows)
+    {
+        var hpe = new DDSketch(SimulationSetup.SketchAccuracy);
+        var vpe = new DDSketch(SimulationSetup.SketchAccuracy);
+        long samples = 0;
+        double unavailable = 0;
+        for (int i = 0; i < cells.Length; i++)
+        {
+            long w = setup.Weights.Integer[i];
+            hpe.Merge(cells[i].Hpe, w);
+            vpe.Merge(cells[i].Vpe, w);
+            samples += cells[i].Samples;
+            unavailable += setup.Grid.Cells[i].AreaWeight * (double.IsNaN(rows[i].UnavailableFraction) ? 1.0 : rows[i].UnavailableFraction);
+        }
+
+        return new GlobalFigures(
+            samples,
+            unavailable,
+            PercentileReport.From(hpe, samples),
+            PercentileReport.From(vpe, samples),
+            Worst(rows, r => r.Hpe.P95),
+            Worst(rows, r => r.Vpe.P95));
+    }
+
+    private static WorstCell Worst(CellResult[] rows, Func<CellResult, double> p95)
+    {
+        CellResult? worst = null;
+        foreach (var r in rows)
+        {
+            double v = p95(r);
+            if (!double.IsNaN(v) && (worst is null || v > p95(worst)))
+            {
+                worst = r;
+            }
+        }
+
+        return worst is null
+            ? new WorstCell(-1, double.NaN, double.NaN, double.NaN)
+            : new WorstCell(worst.CellIndex, worst.LatDeg, worst.LonDeg, p95(worst));
+    }
+}

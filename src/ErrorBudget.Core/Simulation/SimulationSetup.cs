@@ -1,0 +1,49 @@
+using ErrorBudget.Core.Geodesy;
+using ErrorBudget.Core.Grid;
+using ErrorBudget.Core.Orbits;
+using ErrorBudget.Core.Scenarios;
+
+namespace ErrorBudget.Core.Simulation;
+
+/// <summary>What a run derives once from the scenario before sampling anything.</summary>
+internal sealed class SimulationSetup
+{
+    /// <summary>Relative accuracy of every percentile sketch (DDSketch alpha).</summary>
+    public const double SketchAccuracy = 0.005;
+
+    public SimulationSetup(Scenario scenario, RunOptions options)
+    {
+        Scenario = scenario;
+        Seed = scenario.Run.Seed;
+        Grid = ServiceGrid.From(scenario.Grid);
+        Constellation = Constellation.FromShells(scenario.Shells);
+        Epochs = scenario.Run.Epochs;
+        Trials = scenario.Run.Trials;
+        BlockCapacity = Math.Min(Trials, options.TrialBlock);
+        Blocks = (Trials + BlockCapacity - 1) / BlockCapacity;
+        StartRotationAngleRad = EarthRotation.EarthRotationAngle(scenario.Run.StartUtc);
+        Weights = AreaWeights.For(Grid, (long)Epochs * Trials);
+        var tiles = new List<Tile>();
+        for (int first = 0, k = 0; first < Grid.Count; first += options.TileSize, k++)
+        {
+            tiles.Add(new Tile(k, first, Math.Min(options.TileSize, Grid.Count - first)));
+        }
+
+        Tiles = tiles;
+    }
+
+    public Scenario Scenario { get; }
+    public ulong Seed { get; }
+    public ServiceGrid Grid { get; }
+    public Constellation Constellation { get; }
+    public int Epochs { get; }
+    public int Trials { get; }
+    public int BlockCapacity { get; }
+    public int Blocks { get; }
+    public double StartRotationAngleRad { get; }
+    public AreaWeights Weights { get; }
+    public IReadOnlyList<Tile> Tiles { get; }
+
+    /// <summary>Work units for progress: tile jobs over all epochs and blocks.</summary>
+    public long TotalJobs => (long)Epochs * Blocks * Tiles.Count;
+}

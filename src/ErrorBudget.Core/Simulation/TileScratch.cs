@@ -1,0 +1,59 @@
+using ErrorBudget.Core.Numerics;
+using ErrorBudget.Core.Statistics;
+
+namespace ErrorBudget.Core.Simulation;
+
+/// <summary>Per-worker buffers, rented for a tile job and reused: the hot loop allocates nothing.</summary>
+internal sealed class TileScratch
+{
+    public TileScratch(int satellites, int blockCapacity, double relativeAccuracy)
+    {
+        Visible = new int[satellites];
+        LineOfSight = new Vec3[satellites];
+        LineOfSightEnu = new Vec3[satellites];
+        ElevationRad = new double[satellites];
+        Weights = new double[satellites];
+        TruthVariance = new double[satellites];
+        Projection = new double[4 * satellites];
+        Coefficients = new double[12 * satellites];
+        Normals = new double[3 * blockCapacity];
+        Hpe = new DDSketch(relativeAccuracy);
+        Vpe = new DDSketch(relativeAccuracy);
+        Pdop = new DDSketch(relativeAccuracy);
+    }
+
+    public int[] Visible { get; }
+    public Vec3[] LineOfSight { get; }
+    public Vec3[] LineOfSightEnu { get; }
+    public double[] ElevationRad { get; }
+    public double[] Weights { get; }
+    public double[] TruthVariance { get; }
+    public double[] Projection { get; }
+    public double[] Covariance4 { get; } = new double[16];
+    public double[] Covariance3 { get; } = new double[9];
+    public double[] Cholesky3 { get; } = new double[9];
+
+    /// <summary>Per visible satellite i and axis q (E, N, U): 4 coefficients on (orbit x, y, z, clock) at [(i * 3 + q) * 4 + k].</summary>
+    public double[] Coefficients { get; }
+    public double[] Normals { get; }
+
+    /// <summary>This job's share of the epoch's area-weighted sketches, merged under the epoch lock.</summary>
+    public DDSketch Hpe { get; }
+    public DDSketch Vpe { get; }
+    public DDSketch Pdop { get; }
+    public long WeightSum;
+    public long UnavailableWeight;
+    public long SatsInViewWeighted;
+    public long Samples;
+
+    public void ResetEpochShare()
+    {
+        Hpe.Clear();
+        Vpe.Clear();
+        Pdop.Clear();
+        WeightSum = 0;
+        UnavailableWeight = 0;
+        SatsInViewWeighted = 0;
+        Samples = 0;
+    }
+}

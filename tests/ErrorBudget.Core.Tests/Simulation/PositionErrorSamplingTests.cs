@@ -1,0 +1,99 @@
+using ErrorBudget.Core.Errors;
+using ErrorBudget.Core.Geometry;
+using ErrorBudget.Core.Numerics;
+using ErrorBudget.Core.Random;
+using ErrorBudget.Core.Simulation;
+
+namespace ErrorBudget.Core.Tests.Simulation;
+
+/// <summary>
+/// The hot loop against closed forms, on a synthetic geometry whose S is known exactly:
+/// one satellite at zenith and three on the horizon 120 deg apart. With unit range sigma,
+/// (G^T G)^-1 gives sigma_E^2 = sigma_N^2 = 2/3 (uncorrelated: a circular horizontal error) and
+/// sigma_U^2 = 4/3 (REFERENCE-VALUES section 9, closed form of G^T G = diag(1.5, 1.5) + [[1, 1], [1, 4]]).
+/// </summary>
+public sealed class PositionErrorSamplingTests
+{
+    private const int Trials = 200_000;
+    private const double SketchAccuracy = 0.005;
+    private const double ClockSigma = 0.6;
+    private const double LocalSigma = 0.8; // sqrt(0.6^2 + 0.8^2) = 1: unit range sigma per satellite
+
+    private static readonly Vec3[] Enu =
+    [
+        new(0, 0, 1),
+        new(0, 1, 0),
+        new(Math.Sin(2 * Math.PI / 3), Math.Cos(2 * Math.PI / 3), 0),
+        new(Math.Sin(4 * Math.PI / 3), Math.Cos(4 * Math.PI / 3), 0),
+    ];
+
+    [Fact]
+    public void Vpe_p95_matches_1_96_sigma_u_and_circular_hpe_p95_matches_rayleigh()
+    {
+        var (acc, _) = Sample(commonClock: false, localSigma: LocalSigma, seed: 20261201);
+
+        double sigmaU = Math.Sqrt(4.0 / 3.0);
+        double sigmaH = Math.Sqrt(2.0 / 3.0);
+
+        // Vertical: |N(0, sigma_U)|, 95th percentile 1.95996 sigma_U (common practice; REFERENCE-VALUES section 9).
+        double vpeExpected = 1.959964 * sigmaU;
+        // Tolerance of a sample quantile: sd = sqrt(p (1 - p) / n) / f(x_p) (asymptotic normality of order
+        // statistics). For |Z| at p = 0.95, f = 2 phi(1.96) / sigma = 0.11689 / sigma; allow 4.5 sd plus the
+        // sketch's relative accuracy alpha.
+        double vpeTol = 4.5 * Math.Sqrt(0.95 * 0.05 / Trials) / (0.116890 / sigmaU) + SketchAccuracy * vpeExpected;
+        Assert.InRange(acc.Vpe.Quantile(0.95), vpeExpected - vpeTol, vpeExpected + vpeTol);
+
+        // Horizontal, circular: Rayleigh, r95 = sigma sqrt(-2 ln 0.05) = 2.44775 sigma (common practice;
+        // REFERENCE-VALUES section 9: r95 = 1.7308 drms with drms = sqrt(2) sigma). f(r95) = (r95 / sigma^2) * 0.05.
+        double hpeExpected = sigmaH * Math.Sqrt(-2 * Math.Log(0.05));
+        double hpeTol = 4.5 * Math.Sqrt(0.95 * 0.05 / Trials) / (hpeExpected / (sigmaH * sigmaH) * 0.05) + SketchAccuracy * hpeExpected;
+        Assert.InRange(acc.Hpe.Quantile(0.95), hpeExpected - hpeTol, hpeExpected + hpeTol);
+        Assert.Equal(Trials, acc.Hpe.Count);
+    }
+
+    [Fact]
+    public void An_identical_clock_error_on_every_satellite_gives_no_position_error()
+    {
+        // The receiver clock absorbs a common range error (common practice; DESIGN.md sign convention).
+        var (acc, _) = Sample(commonClock: true, localSigma: 0.0, seed: 7);
+        Assert.True(acc.Hpe.Quantile(1.0) <= 1e-6, $"largest HPE {acc.Hpe.Quantile(1.0)} m");
+        Assert.True(acc.Vpe.Quantile(1.0) <= 1e-6, $"largest VPE {acc.Vpe.Quantile(1.0)} m");
+    }
+
+    private static (CellAccumulator Cell, TileScratch Scratch) Sample(bool commonClock, double localSigma, ulong seed)
+    {
+        const int m = 4;
+        var s = new TileScratch(m, Trials, SketchAccuracy);
+        for (int i = 0; i < m; i++)
+        {
+            s.Visible[i] = i;
+            s.LineOfSight[i] = Enu[i];
+            s.LineOfSightEnu[i] = Enu[i];
+            s.Weights[i] = 1.0;
+            s.TruthVariance[i] = localSigma * localSigma;
+        }
+
+        Assert.True(PositionSolution.TrySolve(s.LineOfSightEnu.AsSpan(0, m), s.Weights.AsSpan(0, m), s.Projection.AsSpan(0, 4 * m), s.Covariance4, out _));
+        PositionSolution.ProjectCovariance(s.Projection.AsSpan(0, 4 * m), m, s.TruthVariance.AsSpan(0, m), s.Covariance3);
+        PositionSolution.TryCholesky3(s.Covariance3, s.Cholesky3);
+        TileKernel.BuildCoefficients(m, s);
+
+        var satErrors = new double[m * Trials * SatelliteErrorSampler.Components];
+        ulong clockKey = CounterRng.Key(seed, RandomPurpose.SatelliteClock, 0, 0, 0);
+        double clockSigma = commonClock ? 6.0 : ClockSigma; // a large common error must still vanish
+        for (int j = 0; j < Trials; j++)
+        {
+            for (int sat = 0; sat < m; sat++)
+            {
+                ulong index = commonClock ? (ulong)j : (ulong)(j * m + sat);
+                satErrors[(sat * Trials + j) * SatelliteErrorSampler.Components + 3] = clockSigma * CounterRng.Normal(clockKey, index);
+            }
+        }
+
+        var z = new double[3 * Trials];
+        CounterRng.FillNormals(CounterRng.Key(seed, RandomPurpose.UserLocal, 0, 0, 0), 0, z);
+        var acc = new CellAccumulator(SketchAccuracy);
+        TileKernel.SampleTrials(m, Trials, satErrors, z, acc, 1, s);
+        return (acc, s);
+    }
+}
