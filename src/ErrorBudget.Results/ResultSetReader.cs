@@ -1,0 +1,33 @@
+using Parquet;
+
+namespace ErrorBudget.Results;
+
+/// <summary>Reads back what a short report needs from a result set's tables: row counts and metadata.</summary>
+public static class ResultSetReader
+{
+    /// <summary>Reads the footer of one Parquet table (no column data).</summary>
+    public static async Task<ParquetTableInfo> ReadTableInfoAsync(string parquetPath, CancellationToken ct = default)
+    {
+        await using var reader = await ParquetReader.CreateAsync(parquetPath, parquetOptions: null, ct);
+        long rows = 0;
+        foreach (var group in reader.RowGroups)
+        {
+            rows += group.RowCount;
+        }
+
+        return new ParquetTableInfo(
+            parquetPath,
+            rows,
+            reader.RowGroupCount,
+            reader.Schema.DataFields.Select(f => f.Name).ToArray(),
+            new Dictionary<string, string>(reader.CustomMetadata, StringComparer.Ordinal));
+    }
+
+    /// <summary>cells.parquet of a result set folder.</summary>
+    public static Task<ParquetTableInfo> ReadCellsInfoAsync(string resultDirectory, CancellationToken ct = default) =>
+        ReadTableInfoAsync(Path.Combine(resultDirectory, ResultSetLayout.CellsFileName), ct);
+
+    /// <summary>epochs.parquet of a result set folder.</summary>
+    public static Task<ParquetTableInfo> ReadEpochsInfoAsync(string resultDirectory, CancellationToken ct = default) =>
+        ReadTableInfoAsync(Path.Combine(resultDirectory, ResultSetLayout.EpochsFileName), ct);
+}
