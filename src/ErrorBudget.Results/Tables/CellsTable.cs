@@ -16,11 +16,11 @@ internal static class CellsTable
         primaryKey: "cell_index",
         columns:
         [
-            new Int32Column<CellResult>("cell_index", "1", "Index of the cell in the service-area grid, starting at 0; unique per row.", c => c.CellIndex, minimum: 0),
+            new Int32Column<CellResult>("cell_index", "1", "Row-major index of the cell: row (south to north) times the number of columns plus column (west to east), from 0.", c => c.CellIndex, minimum: 0),
             new DoubleColumn<CellResult>("lat_deg", false, "deg", "Geodetic latitude of the cell centre (WGS-84).", c => c.LatDeg, minimum: -90, maximum: 90),
             new DoubleColumn<CellResult>("lon_deg", false, "deg", "Longitude of the cell centre, east positive (WGS-84).", c => c.LonDeg, minimum: -180, maximum: 360),
-            new DoubleColumn<CellResult>("area_weight", false, "1", "Area weight of the cell in the service-area figures (dimensionless).", c => c.AreaWeight, minimum: 0),
-            new Int64Column<CellResult>("samples", "1", "Epoch-trial samples accumulated for the cell.", c => c.Samples, minimum: 0),
+            new DoubleColumn<CellResult>("area_weight", false, "1", "Share of the service area's surface, (sin lat_north - sin lat_south) x delta_lon normalised to sum 1; weighs the cell in the service-area figures.", c => c.AreaWeight, minimum: 0),
+            new Int64Column<CellResult>("samples", "1", "Position-error samples behind the cell's percentiles: available epochs x trials.", c => c.Samples, minimum: 0),
             new DoubleColumn<CellResult>("unavailable_fraction", true, "1", "Fraction of the cell's samples without a position solution. Null when there are no samples.", c => c.UnavailableFraction, minimum: 0, maximum: 1),
             new DoubleColumn<CellResult>("sats_in_view_mean", true, "1", "Mean number of satellites above the elevation mask. Null when there are no samples.", c => c.SatsInViewMean, minimum: 0),
             new DoubleColumn<CellResult>("pdop_p50", true, "1", "Median position dilution of precision over the epochs with a solution. Null when there is none.", c => c.PdopP50, minimum: 0),
