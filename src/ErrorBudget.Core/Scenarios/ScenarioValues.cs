@@ -1,0 +1,11 @@
+namespace ErrorBudget.Core.Scenarios;
+
+/// <summary>Every table of a scenario after validation, still in file units (km, h, deg).</summary>
+internal sealed record ScenarioValues(
+    SectionValues Run,
+    IReadOnlyList<SectionValues> Shells,
+    SectionValues Grid,
+    SectionValues Clock,
+    SectionValues Orbit,
+    SectionValues User,
+    SectionValues Assumed);

@@ -1,0 +1,43 @@
+namespace ErrorBudget.Core.Scenarios;
+
+/// <summary>
+/// The values of one table that passed their type and range checks, plus defaults; a key that
+/// failed (or is missing) is absent, so rules over it are skipped rather than reported twice.
+/// </summary>
+internal sealed class SectionValues(string path, int tableLine)
+{
+    private readonly Dictionary<string, (object Value, int Line, string Text)> _values = new(StringComparer.Ordinal);
+
+    /// <summary>Key prefix: <c>grid</c>, <c>shell[2]</c>.</summary>
+    public string Path { get; } = path;
+
+    /// <summary>1-based line of the table header; 0 when the table was left out.</summary>
+    public int TableLine { get; } = tableLine;
+
+    public void Set(string key, object value, int line, string text) => _values[key] = (value, line, text);
+
+    public bool Has(params string[] keys) => keys.All(_values.ContainsKey);
+
+    public long Integer(string key) => (long)_values[key].Value;
+
+    public double Number(string key) => (double)_values[key].Value;
+
+    public string Text(string key) => (string)_values[key].Value;
+
+    public DateTimeOffset Time(string key) => (DateTimeOffset)_values[key].Value;
+
+    /// <summary>Line of the key, or of the table when the value is a default.</summary>
+    public int LineOf(string key) => _values[key].Line;
+
+    /// <summary>The value as written, or the default formatted.</summary>
+    public string TextOf(string key) => _values[key].Text;
+
+    public string KeyPath(string key) => $"{Path}.{key}";
+
+    /// <summary><c>shell[1].planes = 4</c>, for rules that name a second key.</summary>
+    public string Describe(string key) => $"{KeyPath(key)} = {TextOf(key)}";
+
+    /// <summary>Reports a rule failure against <paramref name="key"/> at its line.</summary>
+    public void Fail(ScenarioErrorList errors, string key, string problem, string allowed) =>
+        errors.Key(LineOf(key), KeyPath(key), TextOf(key), problem, allowed);
+}
