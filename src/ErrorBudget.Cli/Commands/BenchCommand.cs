@@ -2,7 +2,7 @@ using System.CommandLine;
 using System.Diagnostics;
 using System.Globalization;
 using System.Text.Json;
-using ErrorBudget.Cli.Console;
+using ErrorBudget.Cli.Progress;
 using ErrorBudget.Core.Scenarios;
 using ErrorBudget.Core.Simulation;
 using ErrorBudget.Results;

@@ -1,5 +1,5 @@
 using System.CommandLine;
-using ErrorBudget.Cli.Console;
+using ErrorBudget.Cli.Progress;
 using ErrorBudget.Cli.Reports;
 using ErrorBudget.Core.Simulation;
 using ErrorBudget.Results;

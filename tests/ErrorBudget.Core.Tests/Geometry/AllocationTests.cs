@@ -9,7 +9,7 @@ public class AllocationTests
     [Fact]
     public void TrySolve_ProjectCovariance_and_TryCholesky3_do_not_allocate_after_warm_up()
     {
-        var rng = new Random(3);
+        var rng = new System.Random(3);
         const int m = 10;
         var los = GeometryFixtures.RandomSky(rng, m);
         var weights = GeometryFixtures.RandomWeights(rng, m);

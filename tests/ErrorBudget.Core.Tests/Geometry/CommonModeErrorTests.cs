@@ -12,7 +12,7 @@ public class CommonModeErrorTests
     public void Identical_range_error_on_every_satellite_moves_only_the_clock()
     {
         const double commonErrorMeters = 12.5;
-        var rng = new Random(424242);
+        var rng = new System.Random(424242);
         int solved = 0;
         for (int trial = 0; trial < 200; trial++)
         {

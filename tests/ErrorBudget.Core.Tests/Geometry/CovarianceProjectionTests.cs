@@ -11,7 +11,7 @@ public class CovarianceProjectionTests
     [Fact]
     public void ProjectCovariance_equals_the_matrix_product_computed_independently()
     {
-        var rng = new Random(11);
+        var rng = new System.Random(11);
         for (int trial = 0; trial < 50; trial++)
         {
             int m = rng.Next(5, 12);
@@ -37,7 +37,7 @@ public class CovarianceProjectionTests
     public void Projecting_the_assumed_variances_gives_the_position_block_of_the_covariance()
     {
         // Derived: S W⁻¹ Sᵀ = (GᵀWG)⁻¹ GᵀW W⁻¹ W G (GᵀWG)⁻¹ = (GᵀWG)⁻¹ when var = 1/w.
-        var rng = new Random(12);
+        var rng = new System.Random(12);
         var los = GeometryFixtures.RandomSky(rng, 9);
         var weights = GeometryFixtures.RandomWeights(rng, 9);
         var (ok, projection, covariance, _) = GeometryFixtures.Solve(los, weights);
@@ -57,7 +57,7 @@ public class CovarianceProjectionTests
     [Fact]
     public void TryCholesky3_reproduces_a_positive_definite_matrix()
     {
-        var rng = new Random(13);
+        var rng = new System.Random(13);
         for (int trial = 0; trial < 100; trial++)
         {
             var a = Matrix<double>.Build.Dense(3, 3, (_, _) => (2 * rng.NextDouble()) - 1);

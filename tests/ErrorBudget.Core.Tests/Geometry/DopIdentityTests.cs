@@ -8,7 +8,7 @@ public class DopIdentityTests
     [Fact]
     public void Pdop_squared_is_hdop_squared_plus_vdop_squared_and_gdop_squared_adds_tdop_squared()
     {
-        var rng = new Random(20310601);
+        var rng = new System.Random(20310601);
         for (int trial = 0; trial < 200; trial++)
         {
             int m = rng.Next(4, 13);
@@ -27,7 +27,7 @@ public class DopIdentityTests
     public void Dops_do_not_depend_on_the_weights()
     {
         // Derived: the DOPs are defined on the unweighted G, so any weights give the same DOPs.
-        var rng = new Random(7);
+        var rng = new System.Random(7);
         var los = GeometryFixtures.RandomSky(rng, 8);
         var a = GeometryFixtures.Solve(los, GeometryFixtures.RandomWeights(rng, 8));
         var b = GeometryFixtures.Solve(los, Enumerable.Repeat(1.0, 8).ToArray());

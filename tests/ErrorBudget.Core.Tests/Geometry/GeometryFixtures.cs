@@ -18,11 +18,11 @@ internal static class GeometryFixtures
         sky.Select(s => LineOfSight(s.AzimuthDeg, s.ElevationDeg)).ToArray();
 
     /// <summary>m satellites, azimuth uniform in [0°, 360°), elevation uniform in [5°, 90°].</summary>
-    public static Vec3[] RandomSky(Random rng, int m) =>
+    public static Vec3[] RandomSky(System.Random rng, int m) =>
         Enumerable.Range(0, m).Select(_ => LineOfSight(360.0 * rng.NextDouble(), 5.0 + (85.0 * rng.NextDouble()))).ToArray();
 
     /// <summary>Weights 1/σ² with σ uniform in [0.3, 5] m.</summary>
-    public static double[] RandomWeights(Random rng, int m) =>
+    public static double[] RandomWeights(System.Random rng, int m) =>
         Enumerable.Range(0, m).Select(_ => { double s = 0.3 + (4.7 * rng.NextDouble()); return 1.0 / (s * s); }).ToArray();
 
     public static (bool Ok, double[] Projection, double[] Covariance, Dop Dop) Solve(Vec3[] los, double[] weights)

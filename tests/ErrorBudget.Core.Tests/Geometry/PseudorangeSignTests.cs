@@ -18,7 +18,7 @@ public class PseudorangeSignTests
         const double LinearisationTolerance = 1e-4;
         const double rangeMeters = 2.0e7;
         const double clockMeters = 50.0;
-        var rng = new Random(2024);
+        var rng = new System.Random(2024);
         int m = 8;
         Vec3[] los = GeometryFixtures.RandomSky(rng, m);
         double[] weights = GeometryFixtures.RandomWeights(rng, m);

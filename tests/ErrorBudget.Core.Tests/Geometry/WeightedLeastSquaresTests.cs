@@ -16,7 +16,7 @@ public class WeightedLeastSquaresTests
     [Fact]
     public void Projection_times_geometry_is_the_identity_for_random_geometries_and_weights()
     {
-        var rng = new Random(1234);
+        var rng = new System.Random(1234);
         int solved = 0;
         for (int trial = 0; trial < 200; trial++)
         {
@@ -40,7 +40,7 @@ public class WeightedLeastSquaresTests
     [Fact]
     public void Equal_weights_give_the_ordinary_least_squares_solution()
     {
-        var rng = new Random(99);
+        var rng = new System.Random(99);
         for (int trial = 0; trial < 50; trial++)
         {
             int m = rng.Next(5, 12);
@@ -60,7 +60,7 @@ public class WeightedLeastSquaresTests
     [Fact]
     public void Weighted_solution_matches_a_general_matrix_inverse()
     {
-        var rng = new Random(5);
+        var rng = new System.Random(5);
         for (int trial = 0; trial < 50; trial++)
         {
             int m = rng.Next(5, 12);
@@ -85,7 +85,7 @@ public class WeightedLeastSquaresTests
         // Derived: W → W/k² gives (GᵀWG)⁻¹ → k²(GᵀWG)⁻¹ and leaves S unchanged (suggested check 23).
         const double k = 3.7;
         const double RelativeTolerance = 1e-12;
-        var rng = new Random(31);
+        var rng = new System.Random(31);
         var los = GeometryFixtures.RandomSky(rng, 9);
         var weights = GeometryFixtures.RandomWeights(rng, 9);
         var a = GeometryFixtures.Solve(los, weights);
@@ -111,7 +111,7 @@ public class WeightedLeastSquaresTests
     {
         // Derived: a zero weight zeroes that column of S, and S equals the solution without the satellite.
         const double Tolerance = 1e-12;
-        var rng = new Random(77);
+        var rng = new System.Random(77);
         var los = GeometryFixtures.RandomSky(rng, 7);
         var weights = GeometryFixtures.RandomWeights(rng, 7);
         weights[3] = 0.0;

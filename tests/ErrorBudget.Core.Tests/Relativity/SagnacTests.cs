@@ -48,7 +48,7 @@ public class SagnacTests
         // Derived bound (Sagnac.MaximumMagnitudeSeconds doc). Fixed seed; satellites uniform on the sphere of radius r_s,
         // kept when above the receiver's geocentric horizon. Receivers on the ellipsoid up to 10 km high.
         const double relativeSlack = 1e-12;
-        var random = new Random(20_240_611);
+        var random = new System.Random(20_240_611);
         int accepted = 0;
         double largestRatio = 0;
         foreach (double satelliteRadius in new[] { 20_000_000.0, GpsA, 29_600_000.0, 42_164_000.0 })

@@ -2,7 +2,7 @@ using System.Diagnostics;
 using System.Globalization;
 using Spectre.Console;
 
-namespace ErrorBudget.Cli.Console;
+namespace ErrorBudget.Cli.Progress;
 
 /// <summary>
 /// Shows how a long job advances: a live bar on a terminal (Spectre.Console, on stderr), plain
