@@ -106,7 +106,7 @@ public class SummaryJsonTests
             "lon_deg": null,
             "p95_m": null
           },
-          "caution": "These results come from a simulation for design studies only: they certify nothing, and the applicable standards, regulations and licensed professional practice take precedence over them."
+          "caution": "Results are for design studies only: they certify nothing, and the applicable standards, local regulations and licensed practice take precedence."
         }
         """;
 }
