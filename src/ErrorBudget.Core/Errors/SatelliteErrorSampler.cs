@@ -11,9 +11,10 @@ namespace ErrorBudget.Core.Errors;
 /// every user who sees the satellite at that epoch in that trial, which is what correlates the
 /// errors of neighbouring users.
 /// <para>
-/// Layout of the output (one epoch, one block of <c>blockTrials</c> trials):
-/// <c>errors[(sat * blockTrials + t) * 4 + k]</c>, k = 0, 1, 2 the orbit error vector in ECEF
-/// metres (true minus broadcast satellite position), k = 3 the clock range error in metres.
+/// Layout of the output (one epoch, one block of <c>blockTrials</c> trials), component-major so
+/// the kernel reads consecutive trials with vector loads: <see cref="IndexOf"/> =
+/// <c>(sat * 4 + k) * blockTrials + t</c>, k = 0, 1, 2 the orbit error vector in ECEF metres (true
+/// minus broadcast satellite position), k = 3 the clock range error in metres.
 /// </para>
 /// <para>
 /// Sign convention (owned here): the pseudorange error of satellite s seen along the unit line of
@@ -26,6 +27,10 @@ public sealed class SatelliteErrorSampler
 {
     /// <summary>Values per (satellite, trial): orbit x, y, z and clock.</summary>
     public const int Components = 4;
+
+    /// <summary>Position of (satellite, component, trial within the block) in the error buffer.</summary>
+    public static int IndexOf(int satellite, int component, int trial, int stride) =>
+        (satellite * Components + component) * stride + trial;
 
     private readonly ClockSpec _clock;
     private readonly OrbitErrorSpec _orbit;
@@ -54,7 +59,10 @@ public sealed class SatelliteErrorSampler
         ageSeconds = timeSeconds - phase - k * interval;
     }
 
-    /// <summary>Fills <paramref name="errors"/> for trials [firstTrial, firstTrial + blockTrials).</summary>
+    /// <summary>
+    /// Fills <paramref name="errors"/> for trials [firstTrial, firstTrial + blockTrials), laid out with
+    /// <paramref name="stride"/> (>= blockTrials: the kernel pads blocks to whole vectors).
+    /// </summary>
     public void Sample(
         int epoch,
         double timeSeconds,
@@ -62,6 +70,7 @@ public sealed class SatelliteErrorSampler
         ReadOnlySpan<SatelliteState> states,
         int firstTrial,
         int blockTrials,
+        int stride,
         Span<double> errors)
     {
         Span<double> z = stackalloc double[3];
@@ -87,11 +96,10 @@ public sealed class SatelliteErrorSampler
                 double offset = _clock.UploadSigmaMeters * CounterRng.Normal(clockKey, 0);
                 double rate = _clock.GrowthSigmaMetersPerSecond * CounterRng.Normal(clockKey, 1);
 
-                int o = (s * blockTrials + j) * Components;
-                errors[o] = dr * r.X + da * a.X + dc * c.X;
-                errors[o + 1] = dr * r.Y + da * a.Y + dc * c.Y;
-                errors[o + 2] = dr * r.Z + da * a.Z + dc * c.Z;
-                errors[o + 3] = offset + rate * age;
+                errors[IndexOf(s, 0, j, stride)] = dr * r.X + da * a.X + dc * c.X;
+                errors[IndexOf(s, 1, j, stride)] = dr * r.Y + da * a.Y + dc * c.Y;
+                errors[IndexOf(s, 2, j, stride)] = dr * r.Z + da * a.Z + dc * c.Z;
+                errors[IndexOf(s, 3, j, stride)] = offset + rate * age;
             }
         }
     }

@@ -6,7 +6,7 @@ namespace ErrorBudget.Core.Simulation;
 /// The satellite side of one (epoch, trial block): satellite states and the satellite-level truth
 /// errors of every trial in the block, shared read-only by all user tiles.
 /// </summary>
-internal sealed class EpochWork(int satellites, int blockCapacity)
+internal sealed class EpochWork(int satellites, int laneCapacity)
 {
     public int Epoch;
     public double TimeSeconds;
@@ -20,5 +20,5 @@ internal sealed class EpochWork(int satellites, int blockCapacity)
     public SatelliteState[] States { get; } = new SatelliteState[satellites];
 
     /// <summary>See <see cref="Errors.SatelliteErrorSampler"/> for the layout.</summary>
-    public double[] SatelliteErrors { get; } = new double[satellites * blockCapacity * Errors.SatelliteErrorSampler.Components];
+    public double[] SatelliteErrors { get; } = new double[satellites * laneCapacity * Errors.SatelliteErrorSampler.Components];
 }

@@ -33,7 +33,7 @@ public static class MonteCarloEngine
             cells[i] = new CellAccumulator(accuracy);
         }
 
-        var kernel = new TileKernel(setup, cells);
+        var kernel = new TileKernel(setup, cells, options.UseSimd);
         var sampler = new SatelliteErrorSampler(scenario, setup.Seed);
         var epochs = new EpochResult[setup.Epochs];
         var scratchPool = new ConcurrentBag<TileScratch>();
@@ -45,13 +45,14 @@ public static class MonteCarloEngine
         var prepare = new TransformBlock<(int Epoch, int Block), EpochWork>(
             item =>
             {
-                EpochWork w = workPool.TryTake(out var pooled) ? pooled : new EpochWork(scenario.TotalSatellites, setup.BlockCapacity);
+                EpochWork w = workPool.TryTake(out var pooled) ? pooled : new EpochWork(scenario.TotalSatellites, setup.LaneCapacity);
                 PrepareEpoch(setup, sampler, item.Epoch, item.Block, w);
                 w.Accumulator = accumulators.GetOrAdd(item.Epoch, _ => new EpochAccumulator(accuracy, setup.Blocks * setup.Tiles.Count));
                 w.PendingTiles = setup.Tiles.Count;
                 return w;
             },
-            new ExecutionDataflowBlockOptions { MaxDegreeOfParallelism = threads, BoundedCapacity = threads + 1, CancellationToken = ct });
+            // One epoch at a time, in order: satellite error processes (clocks) advance epoch by epoch.
+            new ExecutionDataflowBlockOptions { MaxDegreeOfParallelism = 1, BoundedCapacity = 2, CancellationToken = ct });
 
         var split = new TransformManyBlock<EpochWork, TileJob>(
             w => setup.Tiles.Select(t => new TileJob(w, t)),
@@ -60,7 +61,7 @@ public static class MonteCarloEngine
         var run = new ActionBlock<TileJob>(
             job =>
             {
-                TileScratch scratch = scratchPool.TryTake(out var s) ? s : new TileScratch(scenario.TotalSatellites, setup.BlockCapacity, accuracy);
+                TileScratch scratch = scratchPool.TryTake(out var s) ? s : new TileScratch(scenario.TotalSatellites, setup.LaneCapacity, accuracy);
                 kernel.Process(job, scratch);
                 EpochAccumulator acc = job.Work.Accumulator;
                 int epoch = job.Work.Epoch;
@@ -96,9 +97,11 @@ public static class MonteCarloEngine
         prepare.LinkTo(split, link);
         split.LinkTo(run, link);
 
-        for (int e = 0; e < setup.Epochs; e++)
+        // Trial blocks outside, epochs inside: a block's satellite error states run through the whole
+        // day before the next block starts, so memory holds one block of states at a time.
+        for (int b = 0; b < setup.Blocks; b++)
         {
-            for (int b = 0; b < setup.Blocks; b++)
+            for (int e = 0; e < setup.Epochs; e++)
             {
                 if (!await prepare.SendAsync((e, b), ct).ConfigureAwait(false))
                 {
@@ -140,7 +143,7 @@ public static class MonteCarloEngine
         w.BlockTrials = Math.Min(setup.BlockCapacity, setup.Trials - w.FirstTrial);
         w.IsFirstBlock = block == 0;
         setup.Constellation.Propagate(t, setup.StartRotationAngleRad, w.States);
-        sampler.Sample(epoch, t, w.RotationAngleRad, w.States, w.FirstTrial, w.BlockTrials, w.SatelliteErrors);
+        sampler.Sample(epoch, t, w.RotationAngleRad, w.States, w.FirstTrial, w.BlockTrials, setup.LaneCapacity, w.SatelliteErrors);
     }
 
     private static EpochResult FinishEpoch(SimulationSetup setup, int epoch, EpochAccumulator acc)

@@ -19,6 +19,12 @@ public sealed record RunOptions
     /// </summary>
     public int TrialBlock { get; init; } = 2048;
 
+    /// <summary>
+    /// Vectorised hot loop (Vector256) when the hardware accelerates it; false forces the scalar twin,
+    /// which tests hold to the same answers.
+    /// </summary>
+    public bool UseSimd { get; init; } = true;
+
     /// <summary>Called from worker threads with (completed work units, total units).</summary>
     public Action<long, long>? Progress { get; init; }
 

@@ -21,6 +21,7 @@ internal sealed class SimulationSetup
         Trials = scenario.Run.Trials;
         BlockCapacity = Math.Min(Trials, options.TrialBlock);
         Blocks = (Trials + BlockCapacity - 1) / BlockCapacity;
+        LaneCapacity = (BlockCapacity + Lanes - 1) / Lanes * Lanes;
         StartRotationAngleRad = EarthRotation.EarthRotationAngle(scenario.Run.StartUtc);
         Weights = AreaWeights.For(Grid, (long)Epochs * Trials);
         var tiles = new List<Tile>();
@@ -40,6 +41,12 @@ internal sealed class SimulationSetup
     public int Trials { get; }
     public int BlockCapacity { get; }
     public int Blocks { get; }
+
+    /// <summary>Trials per block rounded up to whole vectors: the kernel computes padded lanes and discards them.</summary>
+    public int LaneCapacity { get; }
+
+    /// <summary>Trials per vector in the kernel (Vector256 of double).</summary>
+    public const int Lanes = 4;
     public double StartRotationAngleRad { get; }
     public AreaWeights Weights { get; }
     public IReadOnlyList<Tile> Tiles { get; }

@@ -6,17 +6,19 @@ namespace ErrorBudget.Core.Simulation;
 /// <summary>Per-worker buffers, rented for a tile job and reused: the hot loop allocates nothing.</summary>
 internal sealed class TileScratch
 {
-    public TileScratch(int satellites, int blockCapacity, double relativeAccuracy)
+    /// <param name="laneCapacity">Trials per block rounded up to whole vectors.</param>
+    public TileScratch(int satellites, int laneCapacity, double relativeAccuracy)
     {
         Visible = new int[satellites];
         LineOfSight = new Vec3[satellites];
         LineOfSightEnu = new Vec3[satellites];
-        ElevationRad = new double[satellites];
+        SinElevation = new double[satellites];
         Weights = new double[satellites];
         TruthVariance = new double[satellites];
         Projection = new double[4 * satellites];
         Coefficients = new double[12 * satellites];
-        Normals = new double[3 * blockCapacity];
+        Normals = new double[3 * laneCapacity];
+        LaneCapacity = laneCapacity;
         Hpe = new DDSketch(relativeAccuracy);
         Vpe = new DDSketch(relativeAccuracy);
         Pdop = new DDSketch(relativeAccuracy);
@@ -25,7 +27,7 @@ internal sealed class TileScratch
     public int[] Visible { get; }
     public Vec3[] LineOfSight { get; }
     public Vec3[] LineOfSightEnu { get; }
-    public double[] ElevationRad { get; }
+    public double[] SinElevation { get; }
     public double[] Weights { get; }
     public double[] TruthVariance { get; }
     public double[] Projection { get; }
@@ -35,7 +37,10 @@ internal sealed class TileScratch
 
     /// <summary>Per visible satellite i and axis q (E, N, U): 4 coefficients on (orbit x, y, z, clock) at [(i * 3 + q) * 4 + k].</summary>
     public double[] Coefficients { get; }
+    /// <summary>User-level standard normals: axis k of trial j at [k * LaneCapacity + j].</summary>
     public double[] Normals { get; }
+
+    public int LaneCapacity { get; }
 
     /// <summary>This job's share of the epoch's area-weighted sketches, merged under the epoch lock.</summary>
     public DDSketch Hpe { get; }

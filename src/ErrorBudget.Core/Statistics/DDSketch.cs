@@ -62,6 +62,9 @@ public sealed partial class DDSketch
     /// The bucket key ceil(ln x / ln gamma) of a value, or <see cref="ZeroKey"/> for x &lt;= MinIndexable.
     /// Range: x finite and not NaN (not checked).
     /// </summary>
+    /// <summary>1 / ln gamma, for callers that compute keys in vector form (same formula as <see cref="KeyOf"/>).</summary>
+    internal double InverseLnGamma => inverseLnGamma;
+
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public int KeyOf(double value) =>
         value > MinIndexable ? (int)Math.Ceiling(Math.Log(value) * inverseLnGamma) : ZeroKey;

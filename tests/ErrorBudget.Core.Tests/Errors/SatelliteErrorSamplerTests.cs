@@ -28,7 +28,7 @@ public sealed class SatelliteErrorSamplerTests
         constellation.Propagate(t, angle0, states);
         double angle = angle0 + Wgs84.EarthRotationRateRadPerSecond * t;
         var errors = new double[constellation.Count * count * SatelliteErrorSampler.Components];
-        new SatelliteErrorSampler(scenario, scenario.Run.Seed).Sample(epoch, t, angle, states, first, count, errors);
+        new SatelliteErrorSampler(scenario, scenario.Run.Seed).Sample(epoch, t, angle, states, first, count, count, errors);
         return (errors, states, angle);
     }
 
@@ -53,8 +53,10 @@ public sealed class SatelliteErrorSamplerTests
             Vec3 re = EarthRotation.InertialToEarthFixed(r, angle), ae = EarthRotation.InertialToEarthFixed(a, angle), ce = EarthRotation.InertialToEarthFixed(c, angle);
             Vec3 At(int j)
             {
-                int o = (s * Trials + j) * SatelliteErrorSampler.Components;
-                return new Vec3(errors[o], errors[o + 1], errors[o + 2]);
+                return new Vec3(
+                    errors[SatelliteErrorSampler.IndexOf(s, 0, j, Trials)],
+                    errors[SatelliteErrorSampler.IndexOf(s, 1, j, Trials)],
+                    errors[SatelliteErrorSampler.IndexOf(s, 2, j, Trials)]);
             }
 
             AssertVariance(0.25, Enumerable.Range(0, Trials).Select(j => Vec3.Dot(At(j), re)));
@@ -76,7 +78,7 @@ public sealed class SatelliteErrorSamplerTests
             sampler.AgeOfData(s, 20 * 300.0, out _, out double age);
             Assert.InRange(age, 0, interval);
             double expected = sigma0 * sigma0 + rate * age * rate * age;
-            AssertVariance(expected, Enumerable.Range(0, Trials).Select(j => errors[(s * Trials + j) * SatelliteErrorSampler.Components + 3]));
+            AssertVariance(expected, Enumerable.Range(0, Trials).Select(j => errors[SatelliteErrorSampler.IndexOf(s, 3, j, Trials)]));
         }
     }
 
@@ -108,7 +110,7 @@ public sealed class SatelliteErrorSamplerTests
             {
                 for (int k = 0; k < SatelliteErrorSampler.Components; k++)
                 {
-                    Assert.Equal(whole[(s * 10 + 6 + j) * 4 + k], tail[(s * 4 + j) * 4 + k]);
+                    Assert.Equal(whole[SatelliteErrorSampler.IndexOf(s, k, 6 + j, 10)], tail[SatelliteErrorSampler.IndexOf(s, k, j, 4)]);
                 }
             }
         }

@@ -57,6 +57,16 @@ public sealed class EngineDeterminismTests
     }
 
     [Fact]
+    public async Task The_scalar_twin_of_the_hot_loop_gives_the_same_results()
+    {
+        var scenario = ScenarioLoader.Load(SmallScenario, "small.toml");
+        var vector = await MonteCarloEngine.RunAsync(scenario, new RunOptions { UseSimd = true }, CancellationToken.None);
+        var scalar = await MonteCarloEngine.RunAsync(scenario, new RunOptions { UseSimd = false }, CancellationToken.None);
+        Assert.Equal(scalar.Cells, vector.Cells);
+        Assert.Equal(scalar.Global, vector.Global);
+    }
+
+    [Fact]
     public async Task Every_cell_and_epoch_counts_all_its_samples()
     {
         var scenario = ScenarioLoader.Load(SmallScenario, "small.toml");

@@ -1,0 +1,136 @@
+using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
+using System.Runtime.Intrinsics;
+using ErrorBudget.Core.Statistics;
+
+namespace ErrorBudget.Core.Simulation;
+
+/// <summary>
+/// The hot loop over the trials of one (epoch, user): position error from the satellite-level
+/// errors through the coefficients, plus the user-level part L z, then HPE and VPE into the
+/// cell's and the epoch's sketches. Two twins give the same answers (a test holds them to it):
+/// <see cref="SampleVector"/> computes four trials per Vector256 (lanes = trials, the padded lanes
+/// of the last vector are computed and discarded), <see cref="SampleScalar"/> one at a time.
+/// </summary>
+internal static class TrialSampler
+{
+    public static bool VectorPathAvailable => Vector256.IsHardwareAccelerated;
+
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    public static void SampleVector(int m, int trials, double[] satErrors, CellAccumulator acc, long weight, TileScratch s)
+    {
+        int stride = s.LaneCapacity;
+        ref double err = ref MemoryMarshal.GetArrayDataReference(satErrors);
+        ref double coef = ref MemoryMarshal.GetArrayDataReference(s.Coefficients);
+        ref double z = ref MemoryMarshal.GetArrayDataReference(s.Normals);
+        ReadOnlySpan<int> visible = s.Visible.AsSpan(0, m);
+        double[] l = s.Cholesky3;
+        var l0 = Vector256.Create(l[0]);
+        var l3 = Vector256.Create(l[3]);
+        var l4 = Vector256.Create(l[4]);
+        var l6 = Vector256.Create(l[6]);
+        var l7 = Vector256.Create(l[7]);
+        var l8 = Vector256.Create(l[8]);
+        var inverseLnGamma = Vector256.Create(acc.Hpe.InverseLnGamma);
+        var minIndexable = Vector256.Create(DDSketch.MinIndexable);
+        DDSketch cellH = acc.Hpe, cellV = acc.Vpe, epochH = s.Hpe, epochV = s.Vpe;
+        Span<int> keys = stackalloc int[2 * Vector256<double>.Count];
+
+        for (int j = 0; j < trials; j += Vector256<double>.Count)
+        {
+            var e = Vector256<double>.Zero;
+            var n = Vector256<double>.Zero;
+            var u = Vector256<double>.Zero;
+            for (int i = 0; i < m; i++)
+            {
+                int b = visible[i] * 4 * stride + j;
+                var x0 = Vector256.LoadUnsafe(ref err, (nuint)b);
+                var x1 = Vector256.LoadUnsafe(ref err, (nuint)(b + stride));
+                var x2 = Vector256.LoadUnsafe(ref err, (nuint)(b + 2 * stride));
+                var x3 = Vector256.LoadUnsafe(ref err, (nuint)(b + 3 * stride));
+                ref double c = ref Unsafe.Add(ref coef, i * 12);
+                e = Vector256.FusedMultiplyAdd(x0, Vector256.Create(c), e);
+                e = Vector256.FusedMultiplyAdd(x1, Vector256.Create(Unsafe.Add(ref c, 1)), e);
+                e = Vector256.FusedMultiplyAdd(x2, Vector256.Create(Unsafe.Add(ref c, 2)), e);
+                e = Vector256.FusedMultiplyAdd(x3, Vector256.Create(Unsafe.Add(ref c, 3)), e);
+                n = Vector256.FusedMultiplyAdd(x0, Vector256.Create(Unsafe.Add(ref c, 4)), n);
+                n = Vector256.FusedMultiplyAdd(x1, Vector256.Create(Unsafe.Add(ref c, 5)), n);
+                n = Vector256.FusedMultiplyAdd(x2, Vector256.Create(Unsafe.Add(ref c, 6)), n);
+                n = Vector256.FusedMultiplyAdd(x3, Vector256.Create(Unsafe.Add(ref c, 7)), n);
+                u = Vector256.FusedMultiplyAdd(x0, Vector256.Create(Unsafe.Add(ref c, 8)), u);
+                u = Vector256.FusedMultiplyAdd(x1, Vector256.Create(Unsafe.Add(ref c, 9)), u);
+                u = Vector256.FusedMultiplyAdd(x2, Vector256.Create(Unsafe.Add(ref c, 10)), u);
+                u = Vector256.FusedMultiplyAdd(x3, Vector256.Create(Unsafe.Add(ref c, 11)), u);
+            }
+
+            var z0 = Vector256.LoadUnsafe(ref z, (nuint)j);
+            var z1 = Vector256.LoadUnsafe(ref z, (nuint)(stride + j));
+            var z2 = Vector256.LoadUnsafe(ref z, (nuint)(2 * stride + j));
+            e = Vector256.FusedMultiplyAdd(l0, z0, e);
+            n = Vector256.FusedMultiplyAdd(l3, z0, Vector256.FusedMultiplyAdd(l4, z1, n));
+            u = Vector256.FusedMultiplyAdd(l6, z0, Vector256.FusedMultiplyAdd(l7, z1, Vector256.FusedMultiplyAdd(l8, z2, u)));
+
+            var hpe = Vector256.Sqrt(Vector256.FusedMultiplyAdd(e, e, n * n));
+            var vpe = Vector256.Abs(u);
+            VectorKeys(hpe, inverseLnGamma, minIndexable, keys[..4]);
+            VectorKeys(vpe, inverseLnGamma, minIndexable, keys[4..]);
+            int lanes = Math.Min(Vector256<double>.Count, trials - j);
+            for (int k = 0; k < lanes; k++)
+            {
+                cellH.AddKey(keys[k], 1);
+                cellV.AddKey(keys[4 + k], 1);
+                epochH.AddKey(keys[k], weight);
+                epochV.AddKey(keys[4 + k], weight);
+            }
+        }
+    }
+
+    /// <summary>Sketch keys ceil(ln x / ln gamma) of four values, the zero key at or below MinIndexable.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static void VectorKeys(Vector256<double> x, Vector256<double> inverseLnGamma, Vector256<double> minIndexable, Span<int> keys)
+    {
+        var positive = Vector256.GreaterThan(x, minIndexable);
+        var safe = Vector256.ConditionalSelect(positive, x, Vector256<double>.One);
+        var k = Vector256.ConvertToInt64(Vector256.Ceiling(Vector256.Log(safe) * inverseLnGamma));
+        for (int i = 0; i < Vector256<double>.Count; i++)
+        {
+            keys[i] = positive.GetElement(i) != 0 ? (int)k.GetElement(i) : DDSketch.ZeroKey;
+        }
+    }
+
+    /// <summary>The scalar twin of <see cref="SampleVector"/>: same arithmetic, one trial at a time.</summary>
+    public static void SampleScalar(int m, int trials, double[] satErrors, CellAccumulator acc, long weight, TileScratch s)
+    {
+        int stride = s.LaneCapacity;
+        ReadOnlySpan<double> coef = s.Coefficients.AsSpan(0, 12 * m);
+        ReadOnlySpan<int> visible = s.Visible.AsSpan(0, m);
+        ReadOnlySpan<double> l = s.Cholesky3;
+        ReadOnlySpan<double> z = s.Normals;
+        DDSketch cellH = acc.Hpe, cellV = acc.Vpe, epochH = s.Hpe, epochV = s.Vpe;
+        for (int j = 0; j < trials; j++)
+        {
+            double e = 0, n = 0, u = 0;
+            for (int i = 0; i < m; i++)
+            {
+                int b = visible[i] * 4 * stride + j;
+                double x0 = satErrors[b], x1 = satErrors[b + stride], x2 = satErrors[b + 2 * stride], x3 = satErrors[b + 3 * stride];
+                int c = i * 12;
+                e += coef[c] * x0 + coef[c + 1] * x1 + coef[c + 2] * x2 + coef[c + 3] * x3;
+                n += coef[c + 4] * x0 + coef[c + 5] * x1 + coef[c + 6] * x2 + coef[c + 7] * x3;
+                u += coef[c + 8] * x0 + coef[c + 9] * x1 + coef[c + 10] * x2 + coef[c + 11] * x3;
+            }
+
+            double z0 = z[j], z1 = z[stride + j], z2 = z[2 * stride + j];
+            e += l[0] * z0;
+            n += l[3] * z0 + l[4] * z1;
+            u += l[6] * z0 + l[7] * z1 + l[8] * z2;
+
+            int kh = cellH.KeyOf(Math.Sqrt(e * e + n * n));
+            int kv = cellH.KeyOf(Math.Abs(u));
+            cellH.AddKey(kh, 1);
+            cellV.AddKey(kv, 1);
+            epochH.AddKey(kh, weight);
+            epochV.AddKey(kv, weight);
+        }
+    }
+}
