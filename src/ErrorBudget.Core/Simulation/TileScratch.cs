@@ -19,6 +19,8 @@ internal sealed class TileScratch
         Coefficients = new double[12 * satellites];
         Normals = new double[3 * laneCapacity];
         LaneCapacity = laneCapacity;
+        KeysH = new int[laneCapacity];
+        KeysV = new int[laneCapacity];
         Hpe = new DDSketch(relativeAccuracy);
         Vpe = new DDSketch(relativeAccuracy);
         Pdop = new DDSketch(relativeAccuracy);
@@ -41,6 +43,10 @@ internal sealed class TileScratch
     public double[] Normals { get; }
 
     public int LaneCapacity { get; }
+
+    /// <summary>Sketch keys of the block's HPE and VPE samples, one per trial (padded lanes at the end).</summary>
+    public int[] KeysH { get; }
+    public int[] KeysV { get; }
 
     /// <summary>This job's share of the epoch's area-weighted sketches, merged under the epoch lock.</summary>
     public DDSketch Hpe { get; }

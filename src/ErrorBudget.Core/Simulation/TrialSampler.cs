@@ -33,8 +33,8 @@ internal static class TrialSampler
         var l8 = Vector256.Create(l[8]);
         var inverseLnGamma = Vector256.Create(acc.Hpe.InverseLnGamma);
         var minIndexable = Vector256.Create(DDSketch.MinIndexable);
-        DDSketch cellH = acc.Hpe, cellV = acc.Vpe, epochH = s.Hpe, epochV = s.Vpe;
-        Span<int> keys = stackalloc int[2 * Vector256<double>.Count];
+        Span<int> keysH = s.KeysH;
+        Span<int> keysV = s.KeysV;
 
         for (int j = 0; j < trials; j += Vector256<double>.Count)
         {
@@ -72,17 +72,22 @@ internal static class TrialSampler
 
             var hpe = Vector256.Sqrt(Vector256.FusedMultiplyAdd(e, e, n * n));
             var vpe = Vector256.Abs(u);
-            VectorKeys(hpe, inverseLnGamma, minIndexable, keys[..4]);
-            VectorKeys(vpe, inverseLnGamma, minIndexable, keys[4..]);
-            int lanes = Math.Min(Vector256<double>.Count, trials - j);
-            for (int k = 0; k < lanes; k++)
-            {
-                cellH.AddKey(keys[k], 1);
-                cellV.AddKey(keys[4 + k], 1);
-                epochH.AddKey(keys[k], weight);
-                epochV.AddKey(keys[4 + k], weight);
-            }
+            VectorKeys(hpe, inverseLnGamma, minIndexable, keysH.Slice(j, Vector256<double>.Count));
+            VectorKeys(vpe, inverseLnGamma, minIndexable, keysV.Slice(j, Vector256<double>.Count));
         }
+
+        AddAll(acc, weight, s, trials);
+    }
+
+    /// <summary>The block's keys into the cell's sketches (weight 1) and the epoch share (area weight); padded lanes are left out.</summary>
+    private static void AddAll(CellAccumulator acc, long weight, TileScratch s, int trials)
+    {
+        ReadOnlySpan<int> h = s.KeysH.AsSpan(0, trials);
+        ReadOnlySpan<int> v = s.KeysV.AsSpan(0, trials);
+        acc.Hpe.AddKeys(h, 1);
+        acc.Vpe.AddKeys(v, 1);
+        s.Hpe.AddKeys(h, weight);
+        s.Vpe.AddKeys(v, weight);
     }
 
     /// <summary>Sketch keys ceil(ln x / ln gamma) of four values, the zero key at or below MinIndexable.</summary>
@@ -106,7 +111,7 @@ internal static class TrialSampler
         ReadOnlySpan<int> visible = s.Visible.AsSpan(0, m);
         ReadOnlySpan<double> l = s.Cholesky3;
         ReadOnlySpan<double> z = s.Normals;
-        DDSketch cellH = acc.Hpe, cellV = acc.Vpe, epochH = s.Hpe, epochV = s.Vpe;
+        DDSketch mapping = acc.Hpe;
         for (int j = 0; j < trials; j++)
         {
             double e = 0, n = 0, u = 0;
@@ -125,12 +130,10 @@ internal static class TrialSampler
             n += l[3] * z0 + l[4] * z1;
             u += l[6] * z0 + l[7] * z1 + l[8] * z2;
 
-            int kh = cellH.KeyOf(Math.Sqrt(e * e + n * n));
-            int kv = cellH.KeyOf(Math.Abs(u));
-            cellH.AddKey(kh, 1);
-            cellV.AddKey(kv, 1);
-            epochH.AddKey(kh, weight);
-            epochV.AddKey(kv, weight);
+            s.KeysH[j] = mapping.KeyOf(Math.Sqrt(e * e + n * n));
+            s.KeysV[j] = mapping.KeyOf(Math.Abs(u));
         }
+
+        AddAll(acc, weight, s, trials);
     }
 }

@@ -62,6 +62,54 @@ public sealed partial class DDSketch
     /// The bucket key ceil(ln x / ln gamma) of a value, or <see cref="ZeroKey"/> for x &lt;= MinIndexable.
     /// Range: x finite and not NaN (not checked).
     /// </summary>
+    /// <summary>
+    /// Adds the same weight to the buckets of many keys (as <see cref="AddKey"/> for each): the store's
+    /// fields stay in registers for the whole span, which is what makes the hot loop's inserts cheap.
+    /// </summary>
+    public void AddKeys(ReadOnlySpan<int> keys, long weight)
+    {
+        int lo = int.MaxValue, hi = int.MinValue;
+        long zeros = 0;
+        foreach (int key in keys)
+        {
+            if (key == ZeroKey)
+            {
+                zeros++;
+                continue;
+            }
+
+            lo = Math.Min(lo, key);
+            hi = Math.Max(hi, key);
+        }
+
+        if (lo <= hi)
+        {
+            EnsureRange(lo, hi);
+            minKey = Math.Min(minKey, lo);
+            maxKey = Math.Max(maxKey, hi);
+            ref long bucket0 = ref System.Runtime.InteropServices.MemoryMarshal.GetArrayDataReference(counts);
+            int shift = offset;
+            foreach (int key in keys)
+            {
+                if (key != ZeroKey)
+                {
+                    Unsafe.Add(ref bucket0, key - shift) += weight;
+                }
+            }
+        }
+
+        zeroCount += zeros * weight;
+        count += keys.Length * weight;
+    }
+
+    /// <summary>The rare slow path of <see cref="AddKey"/>, kept out of line so the hot path inlines.</summary>
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private int GrowFor(int key)
+    {
+        EnsureRange(key, key);
+        return key - offset;
+    }
+
     /// <summary>1 / ln gamma, for callers that compute keys in vector form (same formula as <see cref="KeyOf"/>).</summary>
     internal double InverseLnGamma => inverseLnGamma;
 
@@ -105,8 +153,7 @@ public sealed partial class DDSketch
         int i = key - offset;
         if ((uint)i >= (uint)counts.Length)
         {
-            EnsureRange(key, key);
-            i = key - offset;
+            i = GrowFor(key);
         }
 
         counts[i] += weight;
