@@ -54,47 +54,58 @@ public static class MonteCarloEngine
             // One epoch at a time, in order: satellite error processes (clocks) advance epoch by epoch.
             new ExecutionDataflowBlockOptions { MaxDegreeOfParallelism = 1, BoundedCapacity = 2, CancellationToken = ct });
 
-        var split = new TransformManyBlock<EpochWork, TileJob>(
-            w => setup.Tiles.Select(t => new TileJob(w, t)),
+        // Epochs travel in small batches so a tile visits its users' cell sketches several epochs in a
+        // row while they are still in cache.
+        var batch = new BatchBlock<EpochWork>(
+            SimulationSetup.EpochsPerBatch,
+            new GroupingDataflowBlockOptions { BoundedCapacity = 2 * SimulationSetup.EpochsPerBatch, CancellationToken = ct });
+
+        var split = new TransformManyBlock<EpochWork[], TileJob>(
+            works => setup.Tiles.Select(t => new TileJob(works, t)),
             new ExecutionDataflowBlockOptions { BoundedCapacity = 2, CancellationToken = ct });
 
         var run = new ActionBlock<TileJob>(
             job =>
             {
                 TileScratch scratch = scratchPool.TryTake(out var s) ? s : new TileScratch(scenario.TotalSatellites, setup.LaneCapacity, accuracy);
-                kernel.Process(job, scratch);
-                EpochAccumulator acc = job.Work.Accumulator;
-                int epoch = job.Work.Epoch;
-                lock (acc.Gate)
+                foreach (EpochWork work in job.Batch)
                 {
-                    acc.Hpe.Merge(scratch.Hpe);
-                    acc.Vpe.Merge(scratch.Vpe);
-                    acc.Pdop.Merge(scratch.Pdop);
-                    acc.WeightSum += scratch.WeightSum;
-                    acc.UnavailableWeight += scratch.UnavailableWeight;
-                    acc.SatsInViewWeighted += scratch.SatsInViewWeighted;
-                    acc.Samples += scratch.Samples;
+                    kernel.Process(work, job.Tile, scratch);
+                    EpochAccumulator acc = work.Accumulator;
+                    int epoch = work.Epoch;
+                    lock (acc.Gate)
+                    {
+                        acc.Hpe.Merge(scratch.Hpe);
+                        acc.Vpe.Merge(scratch.Vpe);
+                        acc.Pdop.Merge(scratch.Pdop);
+                        acc.WeightSum += scratch.WeightSum;
+                        acc.UnavailableWeight += scratch.UnavailableWeight;
+                        acc.SatsInViewWeighted += scratch.SatsInViewWeighted;
+                        acc.Samples += scratch.Samples;
+                    }
+
+                    // The work item goes back to the pool only after its last tile: nothing reads it after that.
+                    if (Interlocked.Decrement(ref work.PendingTiles) == 0)
+                    {
+                        workPool.Add(work);
+                    }
+
+                    if (acc.CompleteOne())
+                    {
+                        epochs[epoch] = FinishEpoch(setup, epoch, acc);
+                        accumulators.TryRemove(epoch, out _);
+                    }
+
+                    options.Progress?.Invoke(Interlocked.Increment(ref done), setup.TotalJobs);
                 }
 
                 scratchPool.Add(scratch);
-                // The work item goes back to the pool only after its last tile: nothing reads it after that.
-                if (Interlocked.Decrement(ref job.Work.PendingTiles) == 0)
-                {
-                    workPool.Add(job.Work);
-                }
-
-                if (acc.CompleteOne())
-                {
-                    epochs[epoch] = FinishEpoch(setup, epoch, acc);
-                    accumulators.TryRemove(epoch, out _);
-                }
-
-                options.Progress?.Invoke(Interlocked.Increment(ref done), setup.TotalJobs);
             },
-            new ExecutionDataflowBlockOptions { MaxDegreeOfParallelism = threads, BoundedCapacity = threads * 4, CancellationToken = ct });
+            new ExecutionDataflowBlockOptions { MaxDegreeOfParallelism = threads, BoundedCapacity = threads * 2, CancellationToken = ct });
 
         var link = new DataflowLinkOptions { PropagateCompletion = true };
-        prepare.LinkTo(split, link);
+        prepare.LinkTo(batch, link);
+        batch.LinkTo(split, link);
         split.LinkTo(run, link);
 
         // Trial blocks outside, epochs inside: a block's satellite error states run through the whole

@@ -10,7 +10,7 @@ public sealed record RunOptions
     public int Threads { get; init; } = Environment.ProcessorCount;
 
     /// <summary>Users per tile, the unit of parallel work. Range: 1 .. 65,536.</summary>
-    public int TileSize { get; init; } = 48;
+    public int TileSize { get; init; } = 16;
 
     /// <summary>
     /// Trials whose satellite errors are held in memory at once (per epoch). Runs with more trials

@@ -45,6 +45,9 @@ internal sealed class SimulationSetup
     /// <summary>Trials per block rounded up to whole vectors: the kernel computes padded lanes and discards them.</summary>
     public int LaneCapacity { get; }
 
+    /// <summary>Epochs a tile job covers in a row (cache reuse of the tile's cell sketches).</summary>
+    public const int EpochsPerBatch = 8;
+
     /// <summary>Trials per vector in the kernel (Vector256 of double).</summary>
     public const int Lanes = 4;
     public double StartRotationAngleRad { get; }

@@ -41,14 +41,13 @@ internal sealed class TileKernel
         _simd = useSimd;
     }
 
-    /// <summary>Processes one tile job into the cells' accumulators and the scratch's epoch share.</summary>
-    public void Process(TileJob job, TileScratch scratch)
+    /// <summary>Processes one tile at one (epoch, trial block) into the cells' accumulators and the scratch's epoch share.</summary>
+    public void Process(EpochWork work, Tile tile, TileScratch scratch)
     {
-        EpochWork work = job.Work;
         scratch.ResetEpochShare();
-        lock (job.Tile.Gate)
+        lock (tile.Gate)
         {
-            for (int c = job.Tile.First; c < job.Tile.First + job.Tile.Count; c++)
+            for (int c = tile.First; c < tile.First + tile.Count; c++)
             {
                 ProcessUser(work, _grid.Cells[c], _cells[c], _weights.Integer[c], scratch);
             }
