@@ -53,10 +53,11 @@ internal static class ProgressDisplay
         while (!running.IsCompleted)
         {
             await Task.WhenAny(running, Task.Delay(500)).ConfigureAwait(false);
-            if (!running.IsCompleted && clock.Elapsed - last >= PlainInterval)
+            double fraction = Fraction(Volatile.Read(ref done), Volatile.Read(ref total));
+            if (!running.IsCompleted && fraction < 1 && clock.Elapsed - last >= PlainInterval)
             {
                 last = clock.Elapsed;
-                await WritePlainLine(context, label, Fraction(Volatile.Read(ref done), Volatile.Read(ref total)), clock.Elapsed).ConfigureAwait(false);
+                await WritePlainLine(context, label, fraction, clock.Elapsed).ConfigureAwait(false);
             }
         }
 

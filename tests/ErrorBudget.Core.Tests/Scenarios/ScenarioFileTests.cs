@@ -36,7 +36,7 @@ public class ScenarioFileTests
         Assert.Equal(["aster", "lumen"], scenario.Shells.Select(s => s.Name));
         Assert.Equal(30, scenario.TotalSatellites);
         Assert.Equal(42_164_000.0, scenario.Shells[1].SemiMajorAxisMeters, ExactTolerance);
-        Assert.Equal(144, scenario.Run.Epochs);         // 24 h / 600 s
+        Assert.Equal(288, scenario.Run.Epochs);         // 24 h / 300 s
         Assert.Equal(2592, scenario.Grid.Cells);
         Assert.Equal(IonosphereMode.DualFrequency, scenario.User.Ionosphere);
     }
