@@ -78,6 +78,29 @@ public sealed class PositionErrorSamplingTests
         }
     }
 
+    [Fact]
+    public void The_hot_loop_allocates_nothing_per_sample()
+    {
+        var (acc, s) = Sample(commonClock: false, localSigma: LocalSigma, seed: 5, simd: true);
+        var satErrors = new double[4 * Trials * SatelliteErrorSampler.Components];
+        // A first pass warms the JIT and grows the sketches to the range of these samples (growth is
+        // the only allocation a sketch makes); the same pass again must then allocate nothing.
+        void Pass()
+        {
+            for (int epoch = 2; epoch < 6; epoch++)
+            {
+                TileKernel.FillUserNormals(5, epoch, 0, 0, Trials, s);
+                TrialSampler.SampleVector(4, Trials, satErrors, acc, 3, s);
+                TrialSampler.SampleScalar(4, Trials, satErrors, acc, 3, s);
+            }
+        }
+
+        Pass();
+        long before = GC.GetAllocatedBytesForCurrentThread();
+        Pass();
+        Assert.Equal(0, GC.GetAllocatedBytesForCurrentThread() - before);
+    }
+
     private static (CellAccumulator Cell, TileScratch Scratch) Sample(bool commonClock, double localSigma, ulong seed, bool simd)
     {
         const int m = 4;
