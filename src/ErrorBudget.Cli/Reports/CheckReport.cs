@@ -15,7 +15,7 @@ internal static class CheckReport
     /// Throughput used for the time estimate, user-solutions per second per thread: a conservative
     /// figure below what `errorbudget bench` measured on the reference machine (see README).
     /// </summary>
-    public const double SolutionsPerSecondPerThread = 8e6;
+    public const double SolutionsPerSecondPerThread = 5e6;
 
     /// <summary>Visibility is sampled on at most this many user-epochs, so check stays quick.</summary>
     private const int VisibilitySampleBudget = 200_000;
@@ -92,14 +92,18 @@ internal static class CheckReport
         return (min, (double)sum / count, max, (double)under4 / count);
     }
 
-    /// <summary>Cell accumulators (five sketches of a few hundred 8-byte buckets each) plus in-flight epoch buffers and the runtime.</summary>
+    /// <summary>
+    /// Cell accumulators (two error sketches of ~600 buckets and three DOP sketches of ~200, 8 bytes
+    /// each, with up to 3x growth slack: about 40 kB a cell, calibrated on W1 with `errorbudget bench`),
+    /// in-flight epoch buffers, and the runtime itself (~70 MiB).
+    /// </summary>
     private static double EstimateMemoryMiB(Scenario s, int cells, int threads)
     {
-        double perCell = 5 * 400 * 8 + 512;
+        double perCell = 40_000;
         int block = Math.Min(s.Run.Trials, 2048);
         double perEpoch = s.TotalSatellites * block * 4 * 8.0;
         double scratch = threads * (3.0 * block * 8 + 3 * 400 * 8);
-        return (cells * perCell + (2 * threads + 4) * perEpoch + scratch) / 1048576.0 + 60;
+        return (cells * perCell + (2 * threads + 4 + 3 * Core.Simulation.SimulationSetup.EpochsPerBatch) * perEpoch + scratch) / 1048576.0 + 70;
     }
 
     private static string FormatSeconds(double seconds) => seconds < 90
