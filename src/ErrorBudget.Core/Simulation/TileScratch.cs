@@ -37,6 +37,23 @@ internal sealed class TileScratch
     public double[] Covariance3 { get; } = new double[9];
     public double[] Cholesky3 { get; } = new double[9];
 
+    /// <summary>
+    /// Position error (E, N, U) common to every trial of this (epoch, user): S applied to the user-level
+    /// deterministic range biases (e.g. a relativistic term the receiver misses). Zero when there are none.
+    /// </summary>
+    public double[] CommonOffset { get; } = new double[3];
+
+    /// <summary>Deterministic user-level range bias per visible satellite, m.</summary>
+    public double[] UserBias { get; private set; } = [];
+
+    public void EnsureUserBias(int satellites)
+    {
+        if (UserBias.Length < satellites)
+        {
+            UserBias = new double[satellites];
+        }
+    }
+
     /// <summary>Per visible satellite i and axis q (E, N, U): 4 coefficients on (orbit x, y, z, clock) at [(i * 3 + q) * 4 + k].</summary>
     public double[] Coefficients { get; }
     /// <summary>User-level standard normals: axis k of trial j at [k * LaneCapacity + j].</summary>

@@ -35,12 +35,15 @@ internal static class TrialSampler
         var minIndexable = Vector256.Create(DDSketch.MinIndexable);
         Span<int> keysH = s.KeysH;
         Span<int> keysV = s.KeysV;
+        var e0 = Vector256.Create(s.CommonOffset[0]);
+        var n0 = Vector256.Create(s.CommonOffset[1]);
+        var u0 = Vector256.Create(s.CommonOffset[2]);
 
         for (int j = 0; j < trials; j += Vector256<double>.Count)
         {
-            var e = Vector256<double>.Zero;
-            var n = Vector256<double>.Zero;
-            var u = Vector256<double>.Zero;
+            var e = e0;
+            var n = n0;
+            var u = u0;
             for (int i = 0; i < m; i++)
             {
                 int b = visible[i] * 4 * stride + j;
@@ -112,9 +115,10 @@ internal static class TrialSampler
         ReadOnlySpan<double> l = s.Cholesky3;
         ReadOnlySpan<double> z = s.Normals;
         DDSketch mapping = acc.Hpe;
+        double e0 = s.CommonOffset[0], n0 = s.CommonOffset[1], u0 = s.CommonOffset[2];
         for (int j = 0; j < trials; j++)
         {
-            double e = 0, n = 0, u = 0;
+            double e = e0, n = n0, u = u0;
             for (int i = 0; i < m; i++)
             {
                 int b = visible[i] * 4 * stride + j;
