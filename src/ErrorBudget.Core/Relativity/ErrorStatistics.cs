@@ -22,4 +22,12 @@ public struct ErrorStatistics
         _maxAbs = Math.Max(_maxAbs, Math.Abs(value));
         Count++;
     }
+
+    /// <summary>Adds every value behind <paramref name="other"/> (rms pooled over both, largest of both).</summary>
+    public void Merge(in ErrorStatistics other)
+    {
+        _sumOfSquares += other._sumOfSquares;
+        _maxAbs = Math.Max(_maxAbs, other._maxAbs);
+        Count += other.Count;
+    }
 }

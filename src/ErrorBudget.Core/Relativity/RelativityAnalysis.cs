@@ -37,7 +37,7 @@ public static class RelativityAnalysis
         var states = new SatelliteState[n];
         double angle0 = EarthRotation.EarthRotationAngle(scenario.Run.StartUtc);
         int epochs = scenario.Run.Epochs;
-        int stride = (int)Math.Max(1, (long)epochs * grid.Count / UserEpochBudget);
+        int stride = (int)Math.Max(1, ((long)epochs * grid.Count + UserEpochBudget - 1) / UserEpochBudget);
         int sampled = 0;
         for (int e = 0; e < epochs; e++)
         {
