@@ -12,6 +12,9 @@ public static class ResultSetLayout
     /// <summary>Per-epoch table, one row per epoch.</summary>
     public const string EpochsFileName = "epochs.parquet";
 
+    /// <summary>Per-satellite relativistic figures, one row per satellite.</summary>
+    public const string RelativityFileName = "relativity.parquet";
+
     /// <summary>Run summary (service-area figures and provenance).</summary>
     public const string SummaryFileName = "summary.json";
 

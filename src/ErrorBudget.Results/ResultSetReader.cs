@@ -27,6 +27,10 @@ public static class ResultSetReader
     public static Task<ParquetTableInfo> ReadCellsInfoAsync(string resultDirectory, CancellationToken ct = default) =>
         ReadTableInfoAsync(Path.Combine(resultDirectory, ResultSetLayout.CellsFileName), ct);
 
+    /// <summary>relativity.parquet of a result set folder.</summary>
+    public static Task<ParquetTableInfo> ReadRelativityInfoAsync(string resultDirectory, CancellationToken ct = default) =>
+        ReadTableInfoAsync(Path.Combine(resultDirectory, ResultSetLayout.RelativityFileName), ct);
+
     /// <summary>epochs.parquet of a result set folder.</summary>
     public static Task<ParquetTableInfo> ReadEpochsInfoAsync(string resultDirectory, CancellationToken ct = default) =>
         ReadTableInfoAsync(Path.Combine(resultDirectory, ResultSetLayout.EpochsFileName), ct);

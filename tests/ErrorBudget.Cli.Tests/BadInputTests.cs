@@ -33,6 +33,10 @@ public sealed class BadInputTests
         { "planes not dividing satellites", Good.Replace("planes = 3", "planes = 5"), "planes" },
         { "empty grid", Good.Replace("lat_step_deg = 45", "lat_step_deg = 45\nlat_min_deg = 0\nlat_max_deg = 10"), "lat_step_deg" },
         { "bad enum", Good + "\n[user]\nmultipath = \"sometimes\"\n", "multipath" },
+        { "bad relativity mode (issue 4)", Good + "\n[relativity]\nsagnac = \"sometimes\"\n", "relativity.sagnac" },
+        { "relativity factor out of range (issue 4)", Good + "\n[relativity]\nfrequency_offset_factor = 3\n", "relativity.frequency_offset_factor" },
+        { "preset without its orbit (issue 4)", Good + "\n[relativity]\nfrequency_offset = \"preset\"\n", "relativity.frequency_offset" },
+        { "unknown relativity key (issue 4)", Good + "\n[relativity]\nlorentz = 1\n", "relativity.lorentz" },
     };
 
     [Theory]

@@ -18,6 +18,20 @@ public sealed class CheckAndBenchTests
     }
 
     [Fact]
+    public async Task Check_prints_the_relativity_figures_per_shell_and_the_position_cost_of_the_mistake()
+    {
+        // Issue 4. Net offsets from SecularRate (L_G - 3GM/(2 a c^2)): +4.5763e-10 at 27,800 km, +4.1384e-10 at 23,500 km.
+        var (code, stdout, err) = await CliRunner.RunAsync("check", CliRunner.ScenarioPath("relativity-two-shells.toml"));
+        Assert.True(code == 0, err);
+        Assert.Contains("relativity: frequency_offset missed", stdout);
+        Assert.Contains("ground absorbs none", stdout);
+        Assert.Contains("halo: offsets SR -0.7977 GR +5.3740 net +4.5763 x 1e-10", stdout);
+        Assert.Contains("rime: offsets SR -0.9436 GR +5.0820 net +4.1384 x 1e-10", stdout);
+        Assert.Contains("+39.539 us/day", stdout);
+        Assert.Contains("position error of the missed terms alone", stdout);
+    }
+
+    [Fact]
     public async Task Bench_json_prints_one_object_with_the_tracked_fields()
     {
         var (code, stdout, err) = await CliRunner.RunAsync("bench", "--json", "--trials", "1", "--threads", "2");

@@ -2,6 +2,7 @@ using ErrorBudget.Core.Geodesy;
 using ErrorBudget.Core.Numerics;
 using ErrorBudget.Core.Orbits;
 using ErrorBudget.Core.Random;
+using ErrorBudget.Core.Relativity;
 using ErrorBudget.Core.Scenarios;
 
 namespace ErrorBudget.Core.Errors;
@@ -36,6 +37,7 @@ public sealed class SatelliteErrorSampler
     private readonly OrbitErrorSpec _orbit;
     private readonly ulong _seed;
     private readonly int _satellites;
+    private readonly RelativisticClockError _relativity;
 
     public SatelliteErrorSampler(Scenario scenario, ulong seed)
     {
@@ -43,6 +45,7 @@ public sealed class SatelliteErrorSampler
         _orbit = scenario.Orbit;
         _seed = seed;
         _satellites = scenario.TotalSatellites;
+        _relativity = new RelativisticClockError(scenario);
     }
 
     /// <summary>
@@ -100,6 +103,16 @@ public sealed class SatelliteErrorSampler
                 errors[IndexOf(s, 1, j, stride)] = dr * r.Y + da * a.Y + dc * c.Y;
                 errors[IndexOf(s, 2, j, stride)] = dr * r.Z + da * a.Z + dc * c.Z;
                 errors[IndexOf(s, 3, j, stride)] = offset + rate * age;
+            }
+
+            // Relativity (issue 4): what [relativity] leaves in the clock, the same in every trial.
+            if (_relativity.IsActive)
+            {
+                double relativity = _relativity.ClockRangeErrorMeters(s, age, timeSeconds, st.EccentricAnomalyRad);
+                for (int j = 0; j < blockTrials; j++)
+                {
+                    errors[IndexOf(s, 3, j, stride)] += relativity;
+                }
             }
         }
     }

@@ -20,5 +20,8 @@ public sealed record Scenario(
     /// <summary>The file name the scenario came from, for messages.</summary>
     public string SourceName { get; init; } = "scenario";
 
+    /// <summary>[relativity]: which relativistic terms are applied (default: all, in full).</summary>
+    public RelativitySpec Relativity { get; init; } = RelativitySpec.AllApplied;
+
     public int TotalSatellites => Shells.Sum(s => s.Satellites);
 }

@@ -19,7 +19,10 @@ internal static class ScenarioBuilder
                 v.Clock.Number("upload_interval_h") * SecondsPerHour),
             new OrbitErrorSpec(v.Orbit.Number("radial_sigma_m"), v.Orbit.Number("along_sigma_m"), v.Orbit.Number("cross_sigma_m")),
             user,
-            new AssumedModelSpec(v.Assumed.Number("ure_sigma_m"), User(v.Assumed, fallback: user)));
+            new AssumedModelSpec(v.Assumed.Number("ure_sigma_m"), User(v.Assumed, fallback: user)))
+        {
+            Relativity = v.Relativity is null ? RelativitySpec.AllApplied : RelativityKeys.Build(v.Relativity),
+        };
     }
 
     private static RunSettings Run(SectionValues run) => new(
@@ -39,7 +42,10 @@ internal static class ScenarioBuilder
         shell.Number("eccentricity"),
         shell.Number("argument_of_perigee_deg"),
         shell.Number("raan_offset_deg"),
-        shell.Number("mean_anomaly_offset_deg"));
+        shell.Number("mean_anomaly_offset_deg"))
+    {
+        RelativityPresetSemiMajorAxisMeters = RelativityKeys.ShellPresetMeters(shell),
+    };
 
     private static GridSpec Grid(SectionValues g) => new(
         g.Number("lat_step_deg"),

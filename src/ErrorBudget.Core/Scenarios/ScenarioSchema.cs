@@ -42,6 +42,7 @@ internal static class ScenarioSchema
         KeySpec.Number("argument_of_perigee_deg", min: -360, max: 360, defaultValue: 0),
         KeySpec.Number("raan_offset_deg", min: -360, max: 360, defaultValue: 0),
         KeySpec.Number("mean_anomaly_offset_deg", min: -360, max: 360, defaultValue: 0),
+        RelativityKeys.ShellPreset,
     ]);
 
     public static readonly TableSpec Grid = new("grid", IsArray: false, Required: true,
@@ -95,7 +96,9 @@ internal static class ScenarioSchema
         .. UserKeys.Select(k => k with { Default = null, Optional = true }),
     ]);
 
-    public static readonly IReadOnlyList<TableSpec> Tables = [Run, Shell, Grid, Clock, Orbit, User, Assumed];
+    public static readonly TableSpec Relativity = RelativityKeys.Table;
+
+    public static readonly IReadOnlyList<TableSpec> Tables = [Run, Shell, Grid, Clock, Orbit, User, Assumed, Relativity];
 
     public static string TableList => string.Join(", ", Tables.Select(t => t.Written));
 

@@ -24,14 +24,19 @@ internal static class ScenarioValidator
         var shells = ReadShells(tree, errors);
         var grid = ReadSingle(tree, ScenarioSchema.Grid, errors);
         GridRules.Check(grid, errors);
-        return new ScenarioValues(
+        var values = new ScenarioValues(
             run,
             shells,
             grid,
             ReadSingle(tree, ScenarioSchema.Clock, errors),
             ReadSingle(tree, ScenarioSchema.Orbit, errors),
             ReadSingle(tree, ScenarioSchema.User, errors),
-            ReadSingle(tree, ScenarioSchema.Assumed, errors));
+            ReadSingle(tree, ScenarioSchema.Assumed, errors))
+        {
+            Relativity = ReadSingle(tree, ScenarioSchema.Relativity, errors),
+        };
+        RelativityRules.Check(values.Relativity, shells, tree, errors);
+        return values;
     }
 
     private static void CheckHeader(TomlSection section, ScenarioErrorList errors)

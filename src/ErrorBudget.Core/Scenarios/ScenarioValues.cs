@@ -8,4 +8,8 @@ internal sealed record ScenarioValues(
     SectionValues Clock,
     SectionValues Orbit,
     SectionValues User,
-    SectionValues Assumed);
+    SectionValues Assumed)
+{
+    /// <summary>[relativity] (defaults only when the table is left out).</summary>
+    public SectionValues? Relativity { get; init; }
+}

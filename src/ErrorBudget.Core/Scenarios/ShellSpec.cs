@@ -24,4 +24,11 @@ public sealed record ShellSpec(
     double Eccentricity,
     double ArgumentOfPerigeeDeg,
     double RaanOffsetDeg,
-    double MeanAnomalyOffsetDeg);
+    double MeanAnomalyOffsetDeg)
+{
+    /// <summary>
+    /// relativity_preset_semi_major_axis_km: the nominal orbit this shell's clocks had their factory offset set
+    /// for, metres, overriding [relativity] preset_semi_major_axis_km; NaN when not given.
+    /// </summary>
+    public double RelativityPresetSemiMajorAxisMeters { get; init; } = double.NaN;
+}

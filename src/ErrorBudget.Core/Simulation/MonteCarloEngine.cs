@@ -137,7 +137,9 @@ public static class MonteCarloEngine
         var global = BuildGlobal(setup, cells, cellResults);
         var metadata = new RunMetadata(
             HashOf(scenario.SourceText), setup.Seed, setup.Trials, options.ToolVersion, threads, started, clock.Elapsed.TotalSeconds);
-        return new RunResult(scenario, metadata, cellResults, epochs, global);
+        // Relativity figures (issue 4): deterministic, computed once from the scenario.
+        var relativity = Relativity.RelativityAnalysis.Build(scenario, ct);
+        return new RunResult(scenario, metadata, cellResults, epochs, global) { Relativity = relativity };
     }
 
     /// <summary>SHA-256 of the scenario text, lower-case hex: the identity of a scenario in every output.</summary>

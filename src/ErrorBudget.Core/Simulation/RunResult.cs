@@ -1,3 +1,4 @@
+using ErrorBudget.Core.Relativity;
 using ErrorBudget.Core.Scenarios;
 
 namespace ErrorBudget.Core.Simulation;
@@ -8,7 +9,11 @@ public sealed record RunResult(
     RunMetadata Metadata,
     IReadOnlyList<CellResult> Cells,
     IReadOnlyList<EpochResult> Epochs,
-    GlobalFigures Global);
+    GlobalFigures Global)
+{
+    /// <summary>relativity.parquet and the check report: per-satellite relativistic figures (issue 4).</summary>
+    public RelativityReport Relativity { get; init; } = RelativityReport.Empty;
+}
 
 /// <summary>Provenance of a run, written into every table's key-value metadata and the summary.</summary>
 /// <param name="ScenarioHash">SHA-256 of the scenario text, lower-case hex.</param>

@@ -17,6 +17,7 @@ internal static class SchemaDocuments
     [
         (FileName(CellsTable.Definition.Name), TableSchemaDocument.Build(CellsTable.Definition)),
         (FileName(EpochsTable.Definition.Name), TableSchemaDocument.Build(EpochsTable.Definition)),
+        (FileName(RelativityTable.Definition.Name), TableSchemaDocument.Build(RelativityTable.Definition)),
         (FileName(SummaryDefinition.Name), SummarySchemaDocument.Build()),
     ];
 

@@ -42,6 +42,23 @@ public class ScenarioFileTests
     }
 
     [Fact]
+    public void The_relativity_demo_pair_differs_only_by_the_second_shell()
+    {
+        // Issue 4: the same mistake on one orbit radius and on two.
+        var single = ScenarioLoader.LoadFile(ScenarioPath("relativity-single-shell.toml"));
+        var two = ScenarioLoader.LoadFile(ScenarioPath("relativity-two-shells.toml"));
+
+        Assert.Equal(single.Relativity, two.Relativity);
+        Assert.Equal(FrequencyOffsetMode.Missed, single.Relativity.FrequencyOffset);
+        Assert.Equal(GroundAbsorption.None, single.Relativity.GroundAbsorbs);
+        Assert.Equal(single.Shells[0], two.Shells[0]);
+        Assert.Equal(2, two.Shells.Count);
+        Assert.NotEqual(single.Shells[0].SemiMajorAxisMeters, two.Shells[1].SemiMajorAxisMeters);
+        Assert.Equal(single.Run, two.Run);
+        Assert.Equal(single.Grid, two.Grid);
+    }
+
+    [Fact]
     public void The_smoke_file_is_small()
     {
         var scenario = ScenarioLoader.LoadFile(ScenarioPath("smoke.toml"));

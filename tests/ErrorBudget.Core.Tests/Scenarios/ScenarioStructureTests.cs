@@ -19,11 +19,11 @@ public class ScenarioStructureTests
     [Fact]
     public void An_unknown_table_is_named_with_its_line_and_the_allowed_tables()
     {
-        var text = ScenarioText.Valid + "[relativity]\nfrequency_offset = \"applied\"\n";
+        var text = ScenarioText.Valid + "[faults]\nrate_per_h = 1\n";
 
-        var error = ScenarioText.SingleError(text, "relativity", ScenarioText.LineOf(text, "[relativity]"));
+        var error = ScenarioText.SingleError(text, "faults", ScenarioText.LineOf(text, "[faults]"));
 
-        Assert.Equal("[run], [[shell]], [grid], [clock], [orbit], [user], [assumed]", error.Allowed);
+        Assert.Equal("[run], [[shell]], [grid], [clock], [orbit], [user], [assumed], [relativity]", error.Allowed);
     }
 
     [Fact]

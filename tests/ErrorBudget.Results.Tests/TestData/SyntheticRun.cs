@@ -1,3 +1,4 @@
+using ErrorBudget.Core.Relativity;
 using ErrorBudget.Core.Scenarios;
 using ErrorBudget.Core.Simulation;
 
@@ -72,5 +73,25 @@ internal static class SyntheticRun
     public static RunResult Result() => With(Cells(), Epochs());
 
     public static RunResult With(IReadOnlyList<CellResult> cells, IReadOnlyList<EpochResult> epochs) =>
-        new(Scenario(), Metadata(), cells, epochs, Global());
+        new(Scenario(), Metadata(), cells, epochs, Global()) { Relativity = new RelativityReport(Relativity(), new RelativityPositionFigures(0, default, default, default), 3) };
+
+    /// <summary>Three satellites: made-up statistics; the last one never seen by a sampled user (user-level figures NaN).</summary>
+    public static RelativitySatelliteFigures[] Relativity() =>
+    [
+        new(0, "meo", 27_600_000, 0.003, -8.0e-11, 5.3e-10, 4.5e-10, 4.5e-10, 0.0, 6.9e-9, Stats(0, 0, 3), Stats(0, 0, 3), Stats(12.5, -20.0, 4), Stats(0.015, 0.0125, 4)),
+        new(1, "meo", 27_600_000, 0.003, -8.0e-11, 5.3e-10, 4.5e-10, 0.0, 4.5e-10, 6.9e-9, Stats(-100, -250, 3), Stats(2.0, -3.0, 3), Stats(-3.0, 5.0, 2), Stats(0.016, 0.018, 2)),
+        new(2, "geo", 42_164_000, 0.0, -5.2e-11, 5.9e-10, 5.4e-10, 5.4e-10, 0.0, 0.0, Stats(0, 0, 3), Stats(0, 0, 3), default, default),
+    ];
+
+    /// <summary>Statistics of <paramref name="count"/> values alternating between <paramref name="a"/> and <paramref name="b"/>.</summary>
+    private static ErrorStatistics Stats(double a, double b, int count)
+    {
+        var s = default(ErrorStatistics);
+        for (int i = 0; i < count; i++)
+        {
+            s.Add(i % 2 == 0 ? a : b);
+        }
+
+        return s;
+    }
 }
