@@ -26,6 +26,7 @@ internal sealed class TileKernel
     private readonly ulong _seed;
     private readonly int _satellites;
     private readonly bool _simd;
+    private readonly Relativity.RelativisticUserBias _userBias;
 
     public TileKernel(SimulationSetup setup, CellAccumulator[] cells, bool useSimd)
     {
@@ -39,6 +40,7 @@ internal sealed class TileKernel
         _seed = setup.Seed;
         _satellites = setup.Scenario.TotalSatellites;
         _simd = useSimd;
+        _userBias = new Relativity.RelativisticUserBias(setup.Scenario.Relativity);
     }
 
     /// <summary>Processes one tile at one (epoch, trial block) into the cells' accumulators and the scratch's epoch share.</summary>
@@ -97,6 +99,7 @@ internal sealed class TileKernel
         PositionSolution.ProjectCovariance(s.Projection.AsSpan(0, 4 * m), m, s.TruthVariance.AsSpan(0, m), s.Covariance3);
         PositionSolution.TryCholesky3(s.Covariance3, s.Cholesky3);
         BuildCoefficients(m, s);
+        CommonOffset(m, work, cell, s);
 
         int trials = work.BlockTrials;
         int lanes = (trials + SimulationSetup.Lanes - 1) / SimulationSetup.Lanes * SimulationSetup.Lanes;
@@ -150,6 +153,30 @@ internal sealed class TileKernel
 
         return PositionSolution.TrySolve(
             s.LineOfSightEnu.AsSpan(0, m), s.Weights.AsSpan(0, m), s.Projection.AsSpan(0, 4 * m), s.Covariance4, out dop);
+    }
+
+    /// <summary>
+    /// S applied to the user-level deterministic range biases (missed Sagnac or Shapiro terms): the same
+    /// position error in every trial of this (epoch, user), added once as the trials' starting value.
+    /// </summary>
+    private void CommonOffset(int m, EpochWork work, GridCell cell, TileScratch s)
+    {
+        double[] offset = s.CommonOffset;
+        Array.Clear(offset);
+        if (!_userBias.IsActive)
+        {
+            return;
+        }
+
+        Vec3 receiver = cell.Frame.Origin;
+        for (int i = 0; i < m; i++)
+        {
+            double b = _userBias.RangeErrorMeters(work.States[s.Visible[i]].PositionEcef, receiver);
+            for (int q = 0; q < 3; q++)
+            {
+                offset[q] += s.Projection[q * m + i] * b;
+            }
+        }
     }
 
     /// <summary>Coefficients of (orbit x, y, z, clock) of visible satellite i on axis q: S_qi u_i and S_qi.</summary>

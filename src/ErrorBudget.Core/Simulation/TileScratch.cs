@@ -43,17 +43,6 @@ internal sealed class TileScratch
     /// </summary>
     public double[] CommonOffset { get; } = new double[3];
 
-    /// <summary>Deterministic user-level range bias per visible satellite, m.</summary>
-    public double[] UserBias { get; private set; } = [];
-
-    public void EnsureUserBias(int satellites)
-    {
-        if (UserBias.Length < satellites)
-        {
-            UserBias = new double[satellites];
-        }
-    }
-
     /// <summary>Per visible satellite i and axis q (E, N, U): 4 coefficients on (orbit x, y, z, clock) at [(i * 3 + q) * 4 + k].</summary>
     public double[] Coefficients { get; }
     /// <summary>User-level standard normals: axis k of trial j at [k * LaneCapacity + j].</summary>
