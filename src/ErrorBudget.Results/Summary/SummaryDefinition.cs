@@ -36,8 +36,22 @@ internal static class SummaryDefinition
         Percentiles("vpe", "Vertical position error (VPE = |dU|) percentiles of the area-weighted pooled distribution of all samples.", r => r.Global.Vpe),
         Worst("worst_cell_hpe", "The cell with the largest 95th percentile of HPE.", r => r.Global.WorstHpe),
         Worst("worst_cell_vpe", "The cell with the largest 95th percentile of VPE.", r => r.Global.WorstVpe),
+        RelativityPosition(),
         new SummaryString("caution", "How far these results may be relied on.", null, _ => ResultCaution.Text),
     ];
+
+    private static SummaryObject RelativityPosition() =>
+        new("relativity_position",
+            "Position error caused by the missed or mis-set relativistic terms alone (all of them together, no other error) "
+            + "at sampled (user, epoch) pairs; zero when every term is applied. Per-satellite range figures are in relativity.parquet.",
+        [
+            new SummaryInteger("user_epochs", "Sampled (user, epoch) pairs with a solution behind these figures.", "1", r => r.Relativity.Position.UserEpochs, 0),
+            new SummaryNumber("hpe_rms_m", "RMS of the HPE the terms cause; null when no pair was sampled.", "m", true, r => r.Relativity.Position.Hpe.Rms, Minimum: 0),
+            new SummaryNumber("hpe_max_m", "Largest HPE the terms cause; null when no pair was sampled.", "m", true, r => r.Relativity.Position.Hpe.MaxAbs, Minimum: 0),
+            new SummaryNumber("vpe_rms_m", "RMS of the VPE the terms cause; null when no pair was sampled.", "m", true, r => r.Relativity.Position.Vpe.Rms, Minimum: 0),
+            new SummaryNumber("vpe_max_m", "Largest VPE the terms cause; null when no pair was sampled.", "m", true, r => r.Relativity.Position.Vpe.MaxAbs, Minimum: 0),
+            new SummaryNumber("receiver_clock_rms_m", "RMS of the receiver-clock error the terms cause (where a common range error goes); null when no pair was sampled.", "m", true, r => r.Relativity.Position.ReceiverClock.Rms, Minimum: 0),
+        ]);
 
     private static SummaryObject Percentiles(string name, string description, Func<RunResult, PercentileSet> get)
     {

@@ -106,6 +106,14 @@ public class SummaryJsonTests
             "lon_deg": null,
             "p95_m": null
           },
+          "relativity_position": {
+            "user_epochs": 0,
+            "hpe_rms_m": null,
+            "hpe_max_m": null,
+            "vpe_rms_m": null,
+            "vpe_max_m": null,
+            "receiver_clock_rms_m": null
+          },
           "caution": "Results are for design studies only: they certify nothing, and the applicable standards, local regulations and licensed practice take precedence."
         }
         """;
