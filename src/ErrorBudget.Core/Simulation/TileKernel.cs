@@ -179,7 +179,11 @@ internal sealed class TileKernel
         }
     }
 
-    /// <summary>Coefficients of (orbit x, y, z, clock) of visible satellite i on axis q: S_qi u_i and S_qi.</summary>
+    /// <summary>
+    /// Per visible satellite i, 8 coefficients at [8 i ..]: the ECEF line of sight (u_x, u_y, u_z) that
+    /// turns the orbit error into range (eps_i = u . dr + clock), then S_Ei, S_Ni, S_Ui that turn the
+    /// range error into position (2 spare, for aligned loads). 7 multiply-adds per satellite and trial.
+    /// </summary>
     internal static void BuildCoefficients(int m, TileScratch s)
     {
         double[] p = s.Projection;
@@ -187,15 +191,13 @@ internal sealed class TileKernel
         for (int i = 0; i < m; i++)
         {
             Vec3 u = s.LineOfSight[i];
-            for (int q = 0; q < 3; q++)
-            {
-                double sq = p[q * m + i];
-                int o = (i * 3 + q) * 4;
-                coef[o] = sq * u.X;
-                coef[o + 1] = sq * u.Y;
-                coef[o + 2] = sq * u.Z;
-                coef[o + 3] = sq;
-            }
+            int o = i * 8;
+            coef[o] = u.X;
+            coef[o + 1] = u.Y;
+            coef[o + 2] = u.Z;
+            coef[o + 3] = p[i];
+            coef[o + 4] = p[m + i];
+            coef[o + 5] = p[2 * m + i];
         }
     }
 }

@@ -16,7 +16,7 @@ internal sealed class TileScratch
         Weights = new double[satellites];
         TruthVariance = new double[satellites];
         Projection = new double[4 * satellites];
-        Coefficients = new double[12 * satellites];
+        Coefficients = new double[8 * satellites];
         Normals = new double[3 * laneCapacity];
         LaneCapacity = laneCapacity;
         KeysH = new int[laneCapacity];
@@ -43,7 +43,7 @@ internal sealed class TileScratch
     /// </summary>
     public double[] CommonOffset { get; } = new double[3];
 
-    /// <summary>Per visible satellite i and axis q (E, N, U): 4 coefficients on (orbit x, y, z, clock) at [(i * 3 + q) * 4 + k].</summary>
+    /// <summary>Per visible satellite: line of sight and projection coefficients (see TileKernel.BuildCoefficients).</summary>
     public double[] Coefficients { get; }
     /// <summary>User-level standard normals: axis k of trial j at [k * LaneCapacity + j].</summary>
     public double[] Normals { get; }

@@ -51,19 +51,13 @@ internal static class TrialSampler
                 var x1 = Vector256.LoadUnsafe(ref err, (nuint)(b + stride));
                 var x2 = Vector256.LoadUnsafe(ref err, (nuint)(b + 2 * stride));
                 var x3 = Vector256.LoadUnsafe(ref err, (nuint)(b + 3 * stride));
-                ref double c = ref Unsafe.Add(ref coef, i * 12);
-                e = Vector256.FusedMultiplyAdd(x0, Vector256.Create(c), e);
-                e = Vector256.FusedMultiplyAdd(x1, Vector256.Create(Unsafe.Add(ref c, 1)), e);
-                e = Vector256.FusedMultiplyAdd(x2, Vector256.Create(Unsafe.Add(ref c, 2)), e);
-                e = Vector256.FusedMultiplyAdd(x3, Vector256.Create(Unsafe.Add(ref c, 3)), e);
-                n = Vector256.FusedMultiplyAdd(x0, Vector256.Create(Unsafe.Add(ref c, 4)), n);
-                n = Vector256.FusedMultiplyAdd(x1, Vector256.Create(Unsafe.Add(ref c, 5)), n);
-                n = Vector256.FusedMultiplyAdd(x2, Vector256.Create(Unsafe.Add(ref c, 6)), n);
-                n = Vector256.FusedMultiplyAdd(x3, Vector256.Create(Unsafe.Add(ref c, 7)), n);
-                u = Vector256.FusedMultiplyAdd(x0, Vector256.Create(Unsafe.Add(ref c, 8)), u);
-                u = Vector256.FusedMultiplyAdd(x1, Vector256.Create(Unsafe.Add(ref c, 9)), u);
-                u = Vector256.FusedMultiplyAdd(x2, Vector256.Create(Unsafe.Add(ref c, 10)), u);
-                u = Vector256.FusedMultiplyAdd(x3, Vector256.Create(Unsafe.Add(ref c, 11)), u);
+                ref double c = ref Unsafe.Add(ref coef, i * 8);
+                var range = Vector256.FusedMultiplyAdd(x0, Vector256.Create(c), x3);
+                range = Vector256.FusedMultiplyAdd(x1, Vector256.Create(Unsafe.Add(ref c, 1)), range);
+                range = Vector256.FusedMultiplyAdd(x2, Vector256.Create(Unsafe.Add(ref c, 2)), range);
+                e = Vector256.FusedMultiplyAdd(range, Vector256.Create(Unsafe.Add(ref c, 3)), e);
+                n = Vector256.FusedMultiplyAdd(range, Vector256.Create(Unsafe.Add(ref c, 4)), n);
+                u = Vector256.FusedMultiplyAdd(range, Vector256.Create(Unsafe.Add(ref c, 5)), u);
             }
 
             var z0 = Vector256.LoadUnsafe(ref z, (nuint)j);
@@ -106,11 +100,11 @@ internal static class TrialSampler
         }
     }
 
-    /// <summary>The scalar twin of <see cref="SampleVector"/>: same arithmetic, one trial at a time.</summary>
+    /// <summary>The scalar twin of <see cref="SampleVector"/>: the same fused operations, one trial at a time.</summary>
     public static void SampleScalar(int m, int trials, double[] satErrors, CellAccumulator acc, long weight, TileScratch s)
     {
         int stride = s.LaneCapacity;
-        ReadOnlySpan<double> coef = s.Coefficients.AsSpan(0, 12 * m);
+        ReadOnlySpan<double> coef = s.Coefficients.AsSpan(0, 8 * m);
         ReadOnlySpan<int> visible = s.Visible.AsSpan(0, m);
         ReadOnlySpan<double> l = s.Cholesky3;
         ReadOnlySpan<double> z = s.Normals;
@@ -123,18 +117,21 @@ internal static class TrialSampler
             {
                 int b = visible[i] * 4 * stride + j;
                 double x0 = satErrors[b], x1 = satErrors[b + stride], x2 = satErrors[b + 2 * stride], x3 = satErrors[b + 3 * stride];
-                int c = i * 12;
-                e += coef[c] * x0 + coef[c + 1] * x1 + coef[c + 2] * x2 + coef[c + 3] * x3;
-                n += coef[c + 4] * x0 + coef[c + 5] * x1 + coef[c + 6] * x2 + coef[c + 7] * x3;
-                u += coef[c + 8] * x0 + coef[c + 9] * x1 + coef[c + 10] * x2 + coef[c + 11] * x3;
+                int c = i * 8;
+                double range = Math.FusedMultiplyAdd(x2, coef[c + 2], Math.FusedMultiplyAdd(x1, coef[c + 1], Math.FusedMultiplyAdd(x0, coef[c], x3)));
+                e = Math.FusedMultiplyAdd(range, coef[c + 3], e);
+                n = Math.FusedMultiplyAdd(range, coef[c + 4], n);
+                u = Math.FusedMultiplyAdd(range, coef[c + 5], u);
             }
 
             double z0 = z[j], z1 = z[stride + j], z2 = z[2 * stride + j];
-            e += l[0] * z0;
-            n += l[3] * z0 + l[4] * z1;
-            u += l[6] * z0 + l[7] * z1 + l[8] * z2;
+            e = Math.FusedMultiplyAdd(l[0], z0, e);
+            n = Math.FusedMultiplyAdd(l[3], z0, Math.FusedMultiplyAdd(l[4], z1, n));
+            u = Math.FusedMultiplyAdd(l[6], z0, Math.FusedMultiplyAdd(l[7], z1, Math.FusedMultiplyAdd(l[8], z2, u)));
 
-            s.KeysH[j] = mapping.KeyOf(Math.Sqrt(e * e + n * n));
+            // The same operations in the same order as the vector twin: identical values, only the
+            // logarithm of the sketch key may differ in the last bit.
+            s.KeysH[j] = mapping.KeyOf(Math.Sqrt(Math.FusedMultiplyAdd(e, e, n * n)));
             s.KeysV[j] = mapping.KeyOf(Math.Abs(u));
         }
 
