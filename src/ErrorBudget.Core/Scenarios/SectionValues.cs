@@ -24,6 +24,11 @@ internal sealed class SectionValues(string path, int tableLine)
 
     public string Text(string key) => (string)_values[key].Value;
 
+    public IReadOnlyList<double> Numbers(string key) => (double[])_values[key].Value;
+
+    /// <summary>True when the key was written in the file (present and not a default, which sits on the table line).</summary>
+    public bool Written(string key) => TableLine != 0 && _values.TryGetValue(key, out var v) && v.Line != TableLine;
+
     public DateTimeOffset Time(string key) => (DateTimeOffset)_values[key].Value;
 
     /// <summary>Line of the key, or of the table when the value is a default.</summary>

@@ -24,4 +24,8 @@ public sealed record ShellSpec(
     double Eccentricity,
     double ArgumentOfPerigeeDeg,
     double RaanOffsetDeg,
-    double MeanAnomalyOffsetDeg);
+    double MeanAnomalyOffsetDeg)
+{
+    /// <summary>The shell's own upload interval (s), overriding [clock] upload_interval_h; null: the [clock] value.</summary>
+    public double? UploadIntervalSeconds { get; init; }
+}
