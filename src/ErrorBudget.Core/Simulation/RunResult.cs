@@ -1,3 +1,5 @@
+using ErrorBudget.Core.Clocks;
+using ErrorBudget.Core.Errors;
 using ErrorBudget.Core.Scenarios;
 
 namespace ErrorBudget.Core.Simulation;
@@ -8,7 +10,14 @@ public sealed record RunResult(
     RunMetadata Metadata,
     IReadOnlyList<CellResult> Cells,
     IReadOnlyList<EpochResult> Epochs,
-    GlobalFigures Global);
+    GlobalFigures Global)
+{
+    /// <summary>Model and simulated Allan deviation of the clock grade in use (empty for the simple clock model).</summary>
+    public IReadOnlyList<ClockAdevRow> Clocks { get; init; } = [];
+
+    /// <summary>Clock and orbit range errors by age of data (empty when the run drew no satellite errors).</summary>
+    public IReadOnlyList<AgeOfDataRow> AgeOfData { get; init; } = [];
+}
 
 /// <summary>Provenance of a run, written into every table's key-value metadata and the summary.</summary>
 /// <param name="ScenarioHash">SHA-256 of the scenario text, lower-case hex.</param>

@@ -9,6 +9,8 @@ public class WrittenTablesMatchSchemaTests
     [Theory]
     [InlineData("cells")]
     [InlineData("epochs")]
+    [InlineData("clocks")]
+    [InlineData("age_of_data")]
     public async Task Written_table_has_the_fields_order_and_types_of_its_table_schema(string name)
     {
         using var temp = new TempFolder();
@@ -31,6 +33,8 @@ public class WrittenTablesMatchSchemaTests
     [Theory]
     [InlineData("cells")]
     [InlineData("epochs")]
+    [InlineData("clocks")]
+    [InlineData("age_of_data")]
     public void Table_schema_fields_carry_a_description_and_numeric_fields_a_unit(string name)
     {
         using var schema = SchemaFiles.Load(name);
@@ -49,6 +53,8 @@ public class WrittenTablesMatchSchemaTests
     [Theory]
     [InlineData("cells")]
     [InlineData("epochs")]
+    [InlineData("clocks")]
+    [InlineData("age_of_data")]
     public async Task Written_values_respect_the_schema_constraints(string name)
     {
         using var temp = new TempFolder();

@@ -7,6 +7,8 @@ public class ParquetMetadataTests
     [Theory]
     [InlineData(ResultSetLayout.CellsFileName, "cells")]
     [InlineData(ResultSetLayout.EpochsFileName, "epochs")]
+    [InlineData(ResultSetLayout.ClocksFileName, "clocks")]
+    [InlineData(ResultSetLayout.AgeOfDataFileName, "age_of_data")]
     public async Task Every_table_carries_the_provenance_metadata_read_by_DuckDB(string fileName, string schemaName)
     {
         using var temp = new TempFolder();
