@@ -52,6 +52,7 @@ internal static class CheckReport
         await w.WriteLineAsync(string.Create(c, $"samples: {grid.Count} users x {epochs} epochs x {s.Run.Trials} trials = {solutions:N0} user-solutions")).ConfigureAwait(false);
         double seconds = solutions / (SolutionsPerSecondPerThread * Math.Max(1, threads));
         await w.WriteLineAsync(string.Create(c, $"estimate: about {FormatSeconds(seconds)} on {threads} threads, about {EstimateMemoryMiB(s, grid.Count, threads):N0} MiB of memory")).ConfigureAwait(false);
+        await ClockReport.WriteAsync(w, s).ConfigureAwait(false);
         await w.WriteLineAsync($"caution: {Caution.Text}").ConfigureAwait(false);
     }
 

@@ -26,6 +26,11 @@ internal static class ClockRules
     public static void Check(SectionValues clock, SectionValues run, IReadOnlyList<SectionValues> shells, ScenarioErrorList errors)
     {
         CheckJitter(clock, shells, errors);
+        if (clock.IsInvalid("grade"))
+        {
+            return;
+        }
+
         if (!clock.Has("grade"))
         {
             foreach (var key in GradedKeys.Where(clock.Written))
@@ -49,7 +54,7 @@ internal static class ClockRules
 
         bool custom = clock.Text("grade") == ScenarioSchema.CustomGrade;
         bool hasPoints = clock.Has("adev_tau_s", "adev_sigma");
-        if (custom && !hasPoints && !CoefficientKeys.Any(k => clock.Has(k)))
+        if (custom && !hasPoints && !CoefficientKeys.Any(clock.Given))
         {
             clock.Fail(errors, "grade", "defines no clock",
                 "with \"custom\", Allan deviation points (adev_tau_s and adev_sigma) or at least one of h2, h0, h_minus_1, h_minus_2");
@@ -105,6 +110,11 @@ internal static class ClockRules
     /// <summary>Both lists or neither, the same length, strictly increasing tau, only with "custom". False when a problem was reported.</summary>
     private static bool CheckPoints(SectionValues clock, ScenarioErrorList errors)
     {
+        if (clock.IsInvalid("adev_tau_s") || clock.IsInvalid("adev_sigma"))
+        {
+            return false;
+        }
+
         bool hasTau = clock.Has("adev_tau_s"), hasSigma = clock.Has("adev_sigma");
         if (hasTau != hasSigma)
         {

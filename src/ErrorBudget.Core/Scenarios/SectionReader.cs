@@ -58,6 +58,7 @@ internal static class SectionReader
         if (problem is not null)
         {
             errors.Key(entry.Line, path, entry.ValueText, problem, key.Allowed);
+            values.MarkInvalid(key.Name);
             return;
         }
 

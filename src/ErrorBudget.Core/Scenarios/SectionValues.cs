@@ -7,6 +7,7 @@ namespace ErrorBudget.Core.Scenarios;
 internal sealed class SectionValues(string path, int tableLine)
 {
     private readonly Dictionary<string, (object Value, int Line, string Text)> _values = new(StringComparer.Ordinal);
+    private readonly HashSet<string> _invalid = new(StringComparer.Ordinal);
 
     /// <summary>Key prefix: <c>grid</c>, <c>shell[2]</c>.</summary>
     public string Path { get; } = path;
@@ -17,6 +18,15 @@ internal sealed class SectionValues(string path, int tableLine)
     public void Set(string key, object value, int line, string text) => _values[key] = (value, line, text);
 
     public bool Has(params string[] keys) => keys.All(_values.ContainsKey);
+
+    /// <summary>Records a key that was written but failed its own checks (already reported).</summary>
+    public void MarkInvalid(string key) => _invalid.Add(key);
+
+    /// <summary>True when the key was written, valid or not: rules about its presence should not report it again.</summary>
+    public bool Given(string key) => _values.ContainsKey(key) || _invalid.Contains(key);
+
+    /// <summary>True when the key was written but failed its own checks.</summary>
+    public bool IsInvalid(string key) => _invalid.Contains(key);
 
     public long Integer(string key) => (long)_values[key].Value;
 
