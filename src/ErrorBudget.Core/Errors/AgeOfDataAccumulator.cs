@@ -23,10 +23,11 @@ internal sealed class AgeOfDataAccumulator
 
     private readonly double _width;
     private readonly long[] _count = new long[Bins];
-    private readonly double[] _ageSum = new double[Bins];
-    private readonly double[] _clockSquares = new double[Bins];
-    private readonly double[] _modelSquares = new double[Bins];
-    private readonly double[] _orbitSquares = new double[Bins];
+    // Order-free sums, so the figures do not depend on how the trials are split into blocks.
+    private readonly FixedPointSum[] _ageSum = new FixedPointSum[Bins];
+    private readonly FixedPointSum[] _clockSquares = new FixedPointSum[Bins];
+    private readonly FixedPointSum[] _modelSquares = new FixedPointSum[Bins];
+    private readonly FixedPointSum[] _orbitSquares = new FixedPointSum[Bins];
     private readonly DDSketch[] _clock = new DDSketch[Bins];
     private readonly DDSketch[] _orbit = new DDSketch[Bins];
 
@@ -61,8 +62,8 @@ internal sealed class AgeOfDataAccumulator
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public void Add(int bin, double clockRangeMeters, double orbitUreMeters)
     {
-        _clockSquares[bin] += clockRangeMeters * clockRangeMeters;
-        _orbitSquares[bin] += orbitUreMeters * orbitUreMeters;
+        _clockSquares[bin].Add(clockRangeMeters * clockRangeMeters);
+        _orbitSquares[bin].Add(orbitUreMeters * orbitUreMeters);
         _clock[bin].AddKey(_clock[bin].KeyOf(Math.Abs(clockRangeMeters)), 1);
         _orbit[bin].AddKey(_orbit[bin].KeyOf(orbitUreMeters), 1);
     }
@@ -71,8 +72,8 @@ internal sealed class AgeOfDataAccumulator
     public void AddEpoch(int bin, double ageSeconds, double modelMeanSquare, int trials)
     {
         _count[bin] += trials;
-        _ageSum[bin] += ageSeconds * trials;
-        _modelSquares[bin] += modelMeanSquare * trials;
+        _ageSum[bin].Add(ageSeconds, trials);
+        _modelSquares[bin].Add(modelMeanSquare, trials);
     }
 
     /// <summary>One row per bin, youngest first.</summary>
@@ -82,10 +83,10 @@ internal sealed class AgeOfDataAccumulator
         for (int i = 0; i < Bins; i++)
         {
             long n = _count[i];
-            double Rms(double sum) => n == 0 ? double.NaN : Math.Sqrt(sum / n);
+            double Rms(FixedPointSum sum) => n == 0 ? double.NaN : Math.Sqrt(sum.Value / n);
             double P95(DDSketch s) => n * 0.05 < 1.0 - 1e-9 ? double.NaN : s.Quantile(0.95);
             rows[i] = new AgeOfDataRow(
-                i, i * _width, (i + 1) * _width, n == 0 ? double.NaN : _ageSum[i] / n, n,
+                i, i * _width, (i + 1) * _width, n == 0 ? double.NaN : _ageSum[i].Value / n, n,
                 Rms(_clockSquares[i]), P95(_clock[i]), Rms(_modelSquares[i]), Rms(_orbitSquares[i]), P95(_orbit[i]));
         }
 
