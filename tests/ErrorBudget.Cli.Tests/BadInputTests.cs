@@ -33,6 +33,9 @@ public sealed class BadInputTests
         { "planes not dividing satellites", Good.Replace("planes = 3", "planes = 5"), "planes" },
         { "empty grid", Good.Replace("lat_step_deg = 45", "lat_step_deg = 45\nlat_min_deg = 0\nlat_max_deg = 10"), "lat_step_deg" },
         { "bad enum", Good + "\n[user]\nmultipath = \"sometimes\"\n", "multipath" },
+        { "unknown clock grade", Good + "\n[clock]\ngrade = \"sundial\"\n", "clock.grade" },
+        { "negative clock coefficient", Good + "\n[clock]\ngrade = \"rubidium\"\nh_minus_1 = -1e-28\n", "clock.h_minus_1" },
+        { "unfittable ADEV points", Good + "\n[clock]\ngrade = \"custom\"\nadev_tau_s = [1, 10, 100, 1000]\nadev_sigma = [1e-10, 1e-12, 1e-14, 1e-16]\n", "clock.adev_sigma" },
     };
 
     [Theory]
