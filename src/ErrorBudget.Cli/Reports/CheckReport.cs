@@ -1,5 +1,7 @@
 using System.Globalization;
+using System.Runtime.CompilerServices;
 using ErrorBudget.Core;
+using ErrorBudget.Core.Clocks;
 using ErrorBudget.Core.Geodesy;
 using ErrorBudget.Core.Grid;
 using ErrorBudget.Core.Numerics;
@@ -100,7 +102,8 @@ internal static class CheckReport
         int block = Math.Min(s.Run.Trials, 2048);
         double perEpoch = s.TotalSatellites * block * 4 * 8.0;
         double scratch = threads * (3.0 * block * 8 + 3 * 400 * 8);
-        return (cells * perCell + (2 * threads + 4) * perEpoch + scratch) / 1048576.0 + 60;
+        double clocks = s.Clock.IsGraded ? s.TotalSatellites * block * (Unsafe.SizeOf<ClockState>() + 8.0) : 0; // one clock state per satellite and trial of a block
+        return (cells * perCell + (2 * threads + 4) * perEpoch + scratch + clocks) / 1048576.0 + 60;
     }
 
     private static string FormatSeconds(double seconds) => seconds < 90

@@ -72,6 +72,9 @@ internal static class ScenarioSchema
     /// <summary>Largest upload jitter (its standard deviation) as a share of the upload interval: keeps uploads in order.</summary>
     public const double MaxJitterShareOfInterval = 0.1;
 
+    /// <summary>Largest power-law coefficient accepted: decades above any clock worth simulating, and far from overflow.</summary>
+    public const double MaxCoefficient = 1e-6;
+
     public static readonly TableSpec Clock = new("clock", IsArray: false, Required: false,
     [
         KeySpec.Number("upload_sigma_m", min: 0, max: 1000, defaultValue: 0.5),
@@ -83,10 +86,10 @@ internal static class ScenarioSchema
             Optional = true,
             AllowedText = $"a catalogue grade ({string.Join(", ", Clocks.ClockCatalogue.Names.Select(n => $"\"{n}\""))}) or \"{CustomGrade}\"",
         },
-        KeySpec.Number("h2", min: 0) with { Optional = true },
-        KeySpec.Number("h0", min: 0) with { Optional = true },
-        KeySpec.Number("h_minus_1", min: 0) with { Optional = true },
-        KeySpec.Number("h_minus_2", min: 0) with { Optional = true },
+        KeySpec.Number("h2", min: 0, max: MaxCoefficient) with { Optional = true },
+        KeySpec.Number("h0", min: 0, max: MaxCoefficient) with { Optional = true },
+        KeySpec.Number("h_minus_1", min: 0, max: MaxCoefficient) with { Optional = true },
+        KeySpec.Number("h_minus_2", min: 0, max: MaxCoefficient) with { Optional = true },
         KeySpec.Number("drift_per_day", min: -1e-6, max: 1e-6) with { Optional = true },
         KeySpec.NumberList("adev_tau_s", min: 0, max: 1e8, minInclusive: false),
         KeySpec.NumberList("adev_sigma", min: 0, max: 1e-3, minInclusive: false),
