@@ -69,7 +69,8 @@ internal static class ClockRules
             }
             catch (ClockDefinitionException e)
             {
-                clock.Fail(errors, "adev_sigma", $"cannot be fitted ({e.Message})",
+                string why = e.Message.StartsWith(AllanDeviationFit.Key + ": ", StringComparison.Ordinal) ? e.Message[(AllanDeviationFit.Key.Length + 2)..] : e.Message;
+                clock.Fail(errors, "adev_sigma", $"cannot be fitted ({why})",
                     "points that non-negative white PM, white FM, flicker FM and random-walk FM terms fit within 25 % rms (at least 4 points)");
             }
         }
