@@ -14,6 +14,11 @@ public static class ResultSetLayout
 
     /// <summary>Per-satellite relativistic figures, one row per satellite.</summary>
     public const string RelativityFileName = "relativity.parquet";
+    /// <summary>Clock grade table: model and simulated Allan deviation per tau.</summary>
+    public const string ClocksFileName = "clocks.parquet";
+
+    /// <summary>Satellite clock and orbit range errors by age of data.</summary>
+    public const string AgeOfDataFileName = "age_of_data.parquet";
 
     /// <summary>Run summary (service-area figures and provenance).</summary>
     public const string SummaryFileName = "summary.json";

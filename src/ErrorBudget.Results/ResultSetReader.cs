@@ -34,4 +34,12 @@ public static class ResultSetReader
     /// <summary>epochs.parquet of a result set folder.</summary>
     public static Task<ParquetTableInfo> ReadEpochsInfoAsync(string resultDirectory, CancellationToken ct = default) =>
         ReadTableInfoAsync(Path.Combine(resultDirectory, ResultSetLayout.EpochsFileName), ct);
+
+    /// <summary>clocks.parquet of a result set folder.</summary>
+    public static Task<ParquetTableInfo> ReadClocksInfoAsync(string resultDirectory, CancellationToken ct = default) =>
+        ReadTableInfoAsync(Path.Combine(resultDirectory, ResultSetLayout.ClocksFileName), ct);
+
+    /// <summary>age_of_data.parquet of a result set folder.</summary>
+    public static Task<ParquetTableInfo> ReadAgeOfDataInfoAsync(string resultDirectory, CancellationToken ct = default) =>
+        ReadTableInfoAsync(Path.Combine(resultDirectory, ResultSetLayout.AgeOfDataFileName), ct);
 }

@@ -6,7 +6,8 @@ using ErrorBudget.Results.Tables;
 namespace ErrorBudget.Results;
 
 /// <summary>
-/// Writes a result set (cells.parquet, epochs.parquet, relativity.parquet, summary.json) atomically: everything goes
+/// Writes a result set (cells.parquet, epochs.parquet, relativity.parquet, clocks.parquet, age_of_data.parquet,
+/// summary.json) atomically: everything goes
 /// into a fresh temporary sibling folder, which is then renamed into place. A failure at any point
 /// leaves the previous state: no temporary folder, no half result set, the old folder untouched.
 /// </summary>
@@ -59,6 +60,11 @@ public sealed class ResultSetWriter
 
         var relativity = RelativityTable.Definition;
         await ParquetTableWriter.WriteAsync(relativity, result.Relativity.Satellites, Path.Combine(folder, relativity.FileName), Metadata(result, relativity.Name), rowsPerGroup, ct);
+        var clocks = ClocksTable.Definition;
+        await ParquetTableWriter.WriteAsync(clocks, result.Clocks, Path.Combine(folder, clocks.FileName), Metadata(result, clocks.Name), rowsPerGroup, ct);
+
+        var ages = AgeOfDataTable.Definition;
+        await ParquetTableWriter.WriteAsync(ages, result.AgeOfData, Path.Combine(folder, ages.FileName), Metadata(result, ages.Name), rowsPerGroup, ct);
 
         ct.ThrowIfCancellationRequested();
         await using var summary = new FileStream(Path.Combine(folder, ResultSetLayout.SummaryFileName), FileMode.CreateNew, FileAccess.Write, FileShare.None);

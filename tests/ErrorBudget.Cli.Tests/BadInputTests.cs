@@ -37,6 +37,9 @@ public sealed class BadInputTests
         { "relativity factor out of range (issue 4)", Good + "\n[relativity]\nfrequency_offset_factor = 3\n", "relativity.frequency_offset_factor" },
         { "preset without its orbit (issue 4)", Good + "\n[relativity]\nfrequency_offset = \"preset\"\n", "relativity.frequency_offset" },
         { "unknown relativity key (issue 4)", Good + "\n[relativity]\nlorentz = 1\n", "relativity.lorentz" },
+        { "unknown clock grade", Good + "\n[clock]\ngrade = \"sundial\"\n", "clock.grade" },
+        { "negative clock coefficient", Good + "\n[clock]\ngrade = \"rubidium\"\nh_minus_1 = -1e-28\n", "clock.h_minus_1" },
+        { "unfittable ADEV points", Good + "\n[clock]\ngrade = \"custom\"\nadev_tau_s = [1, 10, 100, 1000]\nadev_sigma = [1e-10, 1e-12, 1e-14, 1e-16]\n", "clock.adev_sigma" },
     };
 
     [Theory]

@@ -45,7 +45,7 @@ public sealed class RunCommandTests
         string one = Path.Combine(root, "t1"), two = Path.Combine(root, "t2");
         Assert.Equal(0, (await CliRunner.RunAsync("run", CliRunner.ScenarioPath("smoke.toml"), "--out", one, "--threads", "1", "-q")).Code);
         Assert.Equal(0, (await CliRunner.RunAsync("run", CliRunner.ScenarioPath("smoke.toml"), "--out", two, "--threads", "2", "-q")).Code);
-        foreach (var table in new[] { "cells.parquet", "epochs.parquet" })
+        foreach (var table in new[] { "cells.parquet", "epochs.parquet", "clocks.parquet", "age_of_data.parquet" })
         {
             Assert.Equal(await File.ReadAllBytesAsync(Path.Combine(one, table)), await File.ReadAllBytesAsync(Path.Combine(two, table)));
         }

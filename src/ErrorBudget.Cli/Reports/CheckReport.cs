@@ -1,5 +1,7 @@
 using System.Globalization;
+using System.Runtime.CompilerServices;
 using ErrorBudget.Core;
+using ErrorBudget.Core.Clocks;
 using ErrorBudget.Core.Geodesy;
 using ErrorBudget.Core.Grid;
 using ErrorBudget.Core.Numerics;
@@ -53,6 +55,7 @@ internal static class CheckReport
         double seconds = solutions / (SolutionsPerSecondPerThread * Math.Max(1, threads));
         await w.WriteLineAsync(string.Create(c, $"estimate: about {FormatSeconds(seconds)} on {threads} threads, about {EstimateMemoryMiB(s, grid.Count, threads):N0} MiB of memory")).ConfigureAwait(false);
         await RelativityCheckReport.WriteAsync(w, s, ct).ConfigureAwait(false); // issue 4
+        await ClockReport.WriteAsync(w, s).ConfigureAwait(false);
         await w.WriteLineAsync($"caution: {Caution.Text}").ConfigureAwait(false);
     }
 
@@ -104,7 +107,8 @@ internal static class CheckReport
         int block = Math.Min(s.Run.Trials, 2048);
         double perEpoch = s.TotalSatellites * block * 4 * 8.0;
         double scratch = threads * (3.0 * block * 8 + 3 * 400 * 8);
-        return (cells * perCell + (2 * threads + 4 + 3 * Core.Simulation.SimulationSetup.EpochsPerBatch) * perEpoch + scratch) / 1048576.0 + 70;
+        double clocks = s.Clock.IsGraded ? s.TotalSatellites * block * (Unsafe.SizeOf<ClockState>() + 8.0) : 0; // one clock state per satellite and trial of a block
+        return (cells * perCell + (2 * threads + 4 + 3 * Core.Simulation.SimulationSetup.EpochsPerBatch) * perEpoch + scratch + clocks) / 1048576.0 + 70;
     }
 
     private static string FormatSeconds(double seconds) => seconds < 90

@@ -18,7 +18,7 @@ namespace ErrorBudget.Core.Clocks;
 /// The flicker phase uses the pole sum at the start of each step (rectangle rule), so the first step after a reset carries
 /// no flicker phase error. Flicker PM (h1) is not simulated: a non-zero h1 is rejected.
 /// </remarks>
-public sealed class ClockSimulator
+public sealed partial class ClockSimulator
 {
     private readonly TwoStateClockModel _twoState;
     private readonly double[] _phi;

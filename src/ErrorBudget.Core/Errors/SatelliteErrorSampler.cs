@@ -21,7 +21,15 @@ namespace ErrorBudget.Core.Errors;
 /// Sign convention (owned here): the pseudorange error of satellite s seen along the unit line of
 /// sight u (user to satellite, ECEF) is eps = u . dr + clockRange + user terms, where
 /// clockRange = -c (dt_true - dt_broadcast): a satellite clock that runs ahead of its broadcast
-/// model makes the signal look early, so the range looks short.
+/// model makes the signal look early, so the range looks short. The graded clock model writes
+/// -c x with x the simulated phase error (truth minus broadcast, <see cref="Clocks.ClockState"/>).
+/// </para>
+/// <para>
+/// Clock models: the simple one (no grade) draws offset + rate * age per upload; a graded one runs a
+/// power-law noise clock per (trial, satellite) from t = 0 (<see cref="SatelliteClockBank"/>), so the
+/// sampler must see the epochs of a block in order (it replays from epoch 0 otherwise). Age of data
+/// comes from the <see cref="Schedule"/>. Each call also adds its samples to the age-of-data
+/// statistics (<see cref="AgeOfDataRows"/>).
 /// </para>
 /// </summary>
 public sealed class SatelliteErrorSampler
@@ -35,32 +43,49 @@ public sealed class SatelliteErrorSampler
 
     private readonly ClockSpec _clock;
     private readonly OrbitErrorSpec _orbit;
+    private readonly RunSettings _run;
     private readonly ulong _seed;
     private readonly int _satellites;
     private readonly RelativisticClockError _relativity;
+    private readonly SatelliteClockBank? _clocks;
+    private readonly AgeOfDataAccumulator _ageOfData;
 
     public SatelliteErrorSampler(Scenario scenario, ulong seed)
     {
         _clock = scenario.Clock;
         _orbit = scenario.Orbit;
+        _run = scenario.Run;
         _seed = seed;
         _satellites = scenario.TotalSatellites;
         _relativity = new RelativisticClockError(scenario);
+        Schedule = new UploadSchedule(scenario, seed);
+        _clocks = _clock.IsGraded ? new SatelliteClockBank(scenario, Schedule, seed) : null;
+        _ageOfData = new AgeOfDataAccumulator(Schedule.MaxAgeSeconds);
     }
 
     /// <summary>
-    /// Upload schedule: uploads of satellite s happen at phase_s + k * interval with the phases
-    /// staggered evenly across the constellation, so ages of data at any instant spread over one
-    /// interval (common practice for a ground segment that contacts satellites in turn).
+    /// Upload schedule: uploads of satellite s happen at phase_s + k * interval (+ jitter) with the
+    /// phases staggered evenly across the constellation, so ages of data at any instant spread over
+    /// one interval (common practice for a ground segment that contacts satellites in turn).
     /// </summary>
-    public void AgeOfData(int satellite, double timeSeconds, out long uploadIndex, out double ageSeconds)
+    public UploadSchedule Schedule { get; }
+
+    /// <summary>The latest upload of a satellite at a time and the age of data then (s); see <see cref="UploadSchedule"/>.</summary>
+    public void AgeOfData(int satellite, double timeSeconds, out long uploadIndex, out double ageSeconds) =>
+        Schedule.AgeOfData(satellite, timeSeconds, out uploadIndex, out ageSeconds);
+
+    /// <summary>Age of data (s) of <paramref name="satellite"/> at epoch <paramref name="epoch"/> of the run.</summary>
+    public double AgeOfDataSeconds(int satellite, int epoch)
     {
-        double interval = _clock.UploadIntervalSeconds;
-        double phase = interval * satellite / _satellites;
-        double k = Math.Floor((timeSeconds - phase) / interval);
-        uploadIndex = (long)k;
-        ageSeconds = timeSeconds - phase - k * interval;
+        Schedule.AgeOfData(satellite, _run.EpochTimeSeconds(epoch), out _, out double age);
+        return age;
     }
+
+    /// <summary>
+    /// Clock and orbit range error statistics by age of data over every sample drawn so far
+    /// (<see cref="AgeOfDataAccumulator.Bins"/> equal bins over [0, <see cref="UploadSchedule.MaxAgeSeconds"/>]).
+    /// </summary>
+    public IReadOnlyList<AgeOfDataRow> AgeOfDataRows() => _ageOfData.Rows();
 
     /// <summary>
     /// Fills <paramref name="errors"/> for trials [firstTrial, firstTrial + blockTrials), laid out with
@@ -76,6 +101,8 @@ public sealed class SatelliteErrorSampler
         int stride,
         Span<double> errors)
     {
+        _clocks?.AdvanceTo(epoch, firstTrial, blockTrials);
+        const double lightSpeed = PhysicalConstants.SpeedOfLight;
         Span<double> z = stackalloc double[3];
         for (int s = 0; s < _satellites; s++)
         {
@@ -85,6 +112,8 @@ public sealed class SatelliteErrorSampler
             Vec3 a = EarthRotation.InertialToEarthFixed(along, rotationAngleRad);
             Vec3 c = EarthRotation.InertialToEarthFixed(cross, rotationAngleRad);
             AgeOfData(s, timeSeconds, out long upload, out double age);
+            int bin = _ageOfData.BinOf(age);
+            _ageOfData.AddEpoch(bin, age, GradedClockModel.RangeMeanSquare(_clock, age, _run.StepSeconds), blockTrials);
 
             for (int j = 0; j < blockTrials; j++)
             {
@@ -95,14 +124,24 @@ public sealed class SatelliteErrorSampler
                 double da = _orbit.AlongSigmaMeters * z[1];
                 double dc = _orbit.CrossSigmaMeters * z[2];
 
-                ulong clockKey = CounterRng.Key(_seed, RandomPurpose.SatelliteClock, trial, upload, s);
-                double offset = _clock.UploadSigmaMeters * CounterRng.Normal(clockKey, 0);
-                double rate = _clock.GrowthSigmaMetersPerSecond * CounterRng.Normal(clockKey, 1);
+                double clockRange;
+                if (_clocks is null)
+                {
+                    ulong clockKey = CounterRng.Key(_seed, RandomPurpose.SatelliteClock, trial, upload, s);
+                    double offset = _clock.UploadSigmaMeters * CounterRng.Normal(clockKey, 0);
+                    double rate = _clock.GrowthSigmaMetersPerSecond * CounterRng.Normal(clockKey, 1);
+                    clockRange = offset + rate * age;
+                }
+                else
+                {
+                    clockRange = -lightSpeed * _clocks.PhaseSeconds(s, j);
+                }
 
                 errors[IndexOf(s, 0, j, stride)] = dr * r.X + da * a.X + dc * c.X;
                 errors[IndexOf(s, 1, j, stride)] = dr * r.Y + da * a.Y + dc * c.Y;
                 errors[IndexOf(s, 2, j, stride)] = dr * r.Z + da * a.Z + dc * c.Z;
-                errors[IndexOf(s, 3, j, stride)] = offset + rate * age;
+                errors[IndexOf(s, 3, j, stride)] = clockRange;
+                _ageOfData.Add(bin, clockRange, AgeOfDataAccumulator.OrbitUre(dr, da, dc));
             }
 
             // Relativity (issue 4): what [relativity] leaves in the clock, the same in every trial.

@@ -17,4 +17,7 @@ internal enum KeyKind
 
     /// <summary>A free, non-empty label.</summary>
     Text,
+
+    /// <summary>A TOML array of finite numbers (integers or floats), each held to the key's range.</summary>
+    NumberList,
 }

@@ -10,6 +10,9 @@ internal sealed record KeySpec(string Name, KeyKind Kind)
 {
     public const int MaxTextLength = 64;
 
+    /// <summary>Most items a <see cref="KeyKind.NumberList"/> accepts.</summary>
+    public const int MaxListLength = 32;
+
     /// <summary>Value used when the key is left out: long, double or string. Null: none.</summary>
     public object? Default { get; init; }
 
@@ -37,6 +40,7 @@ internal sealed record KeySpec(string Name, KeyKind Kind)
         KeyKind.Number => RangeText(),
         KeyKind.Choice => string.Join(", ", Choices.Select(c => $"\"{c}\"")),
         KeyKind.Timestamp => "an RFC 3339 UTC timestamp such as \"2031-06-01T00:00:00Z\"",
+        KeyKind.NumberList => $"an array of 1 to {MaxListLength} numbers, each {RangeText()}",
         _ => $"a non-empty string of at most {MaxTextLength} characters",
     };
 
@@ -50,6 +54,10 @@ internal sealed record KeySpec(string Name, KeyKind Kind)
         {
             Min = min, Max = max, Default = defaultValue, MinInclusive = minInclusive, MaxInclusive = maxInclusive,
         };
+
+    /// <summary>An optional array of numbers, each in the range (no default: left out means not given).</summary>
+    public static KeySpec NumberList(string name, double? min = null, double? max = null, bool minInclusive = true) =>
+        new(name, KeyKind.NumberList) { Min = min, Max = max, MinInclusive = minInclusive, Optional = true };
 
     public static KeySpec Choice(string name, string defaultValue, params string[] choices) =>
         new(name, KeyKind.Choice) { Choices = choices, Default = defaultValue };

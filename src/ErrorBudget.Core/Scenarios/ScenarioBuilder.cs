@@ -9,14 +9,12 @@ internal static class ScenarioBuilder
     public static Scenario Build(ScenarioValues v)
     {
         var user = User(v.User, fallback: null);
+        var run = Run(v.Run);
         return new Scenario(
-            Run(v.Run),
+            run,
             [.. v.Shells.Select(Shell)],
             Grid(v.Grid),
-            new ClockSpec(
-                v.Clock.Number("upload_sigma_m"),
-                v.Clock.Number("growth_sigma_m_per_h") / SecondsPerHour,
-                v.Clock.Number("upload_interval_h") * SecondsPerHour),
+            Clock(v.Clock, run.StepSeconds),
             new OrbitErrorSpec(v.Orbit.Number("radial_sigma_m"), v.Orbit.Number("along_sigma_m"), v.Orbit.Number("cross_sigma_m")),
             user,
             new AssumedModelSpec(v.Assumed.Number("ure_sigma_m"), User(v.Assumed, fallback: user)))
@@ -32,6 +30,35 @@ internal static class ScenarioBuilder
         run.Number("duration_h") * SecondsPerHour,
         run.Number("step_s"));
 
+    private static ClockSpec Clock(SectionValues c, double stepSeconds)
+    {
+        var spec = new ClockSpec(
+            c.Number("upload_sigma_m"),
+            c.Number("growth_sigma_m_per_h") / SecondsPerHour,
+            c.Number("upload_interval_h") * SecondsPerHour)
+        {
+            UploadJitterSeconds = c.Number("upload_jitter_s"),
+            JitterDistribution = c.Text("upload_jitter_distribution") == ScenarioSchema.GaussianJitter
+                ? UploadJitterDistribution.Gaussian
+                : UploadJitterDistribution.Uniform,
+        };
+        if (!c.Has("grade"))
+        {
+            return spec;
+        }
+
+        var (noise, points, rms) = ClockRules.Resolve(c, stepSeconds);
+        return spec with
+        {
+            Grade = c.Text("grade"),
+            Noise = noise,
+            AdevPoints = points,
+            AdevFitRelativeRms = rms,
+            EstimationPhaseSigmaSeconds = c.Number("estimation_phase_sigma_ns") * 1e-9,
+            EstimationFrequencySigma = c.Number("estimation_frequency_sigma"),
+        };
+    }
+
     private static ShellSpec Shell(SectionValues shell, int index) => new(
         ScenarioValidator.ShellName(shell, index),
         (int)shell.Integer("satellites"),
@@ -45,6 +72,7 @@ internal static class ScenarioBuilder
         shell.Number("mean_anomaly_offset_deg"))
     {
         RelativityPresetSemiMajorAxisMeters = RelativityKeys.ShellPresetMeters(shell),
+        UploadIntervalSeconds = shell.Has("upload_interval_h") ? shell.Number("upload_interval_h") * SecondsPerHour : null,
     };
 
     private static GridSpec Grid(SectionValues g) => new(

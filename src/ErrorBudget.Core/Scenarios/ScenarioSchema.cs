@@ -18,6 +18,12 @@ internal static class ScenarioSchema
 
     public const string DefaultStartUtc = "2031-06-01T00:00:00Z";
 
+    /// <summary>[clock] upload_interval_h, also accepted per shell (without a default there).</summary>
+    private static readonly KeySpec UploadInterval = KeySpec.Number("upload_interval_h", min: 1.0 / 60.0, max: 720, defaultValue: 12) with
+    {
+        AllowedText = "1/60 (one minute) <= upload_interval_h <= 720",
+    };
+
     public static readonly TableSpec Run = new("run", IsArray: false, Required: true,
     [
         KeySpec.Integer("seed", min: 0, defaultValue: 1),
@@ -43,6 +49,7 @@ internal static class ScenarioSchema
         KeySpec.Number("raan_offset_deg", min: -360, max: 360, defaultValue: 0),
         KeySpec.Number("mean_anomaly_offset_deg", min: -360, max: 360, defaultValue: 0),
         RelativityKeys.ShellPreset,
+        UploadInterval with { Default = null, Optional = true },
     ]);
 
     public static readonly TableSpec Grid = new("grid", IsArray: false, Required: true,
@@ -57,14 +64,43 @@ internal static class ScenarioSchema
         KeySpec.Number("mask_deg", min: 0, max: 90, defaultValue: 5, maxInclusive: false),
     ]);
 
+    /// <summary>The grade value that defines a clock from its own coefficients or Allan deviation points.</summary>
+    public const string CustomGrade = "custom";
+
+    public const string UniformJitter = "uniform";
+    public const string GaussianJitter = "gaussian";
+
+    /// <summary>Largest upload jitter (its standard deviation) as a share of the upload interval: keeps uploads in order.</summary>
+    public const double MaxJitterShareOfInterval = 0.1;
+
+    /// <summary>Largest power-law coefficient accepted: decades above any clock worth simulating, and far from overflow.</summary>
+    public const double MaxCoefficient = 1e-6;
+
     public static readonly TableSpec Clock = new("clock", IsArray: false, Required: false,
     [
         KeySpec.Number("upload_sigma_m", min: 0, max: 1000, defaultValue: 0.5),
         KeySpec.Number("growth_sigma_m_per_h", min: 0, max: 3600, defaultValue: 0.2),
-        KeySpec.Number("upload_interval_h", min: 1.0 / 60.0, max: 720, defaultValue: 12) with
+        UploadInterval,
+        new KeySpec("grade", KeyKind.Choice)
         {
-            AllowedText = "1/60 (one minute) <= upload_interval_h <= 720",
+            Choices = [.. Clocks.ClockCatalogue.Names, CustomGrade],
+            Optional = true,
+            AllowedText = $"a catalogue grade ({string.Join(", ", Clocks.ClockCatalogue.Names.Select(n => $"\"{n}\""))}) or \"{CustomGrade}\"",
         },
+        KeySpec.Number("h2", min: 0, max: MaxCoefficient) with { Optional = true },
+        KeySpec.Number("h0", min: 0, max: MaxCoefficient) with { Optional = true },
+        KeySpec.Number("h_minus_1", min: 0, max: MaxCoefficient) with { Optional = true },
+        KeySpec.Number("h_minus_2", min: 0, max: MaxCoefficient) with { Optional = true },
+        KeySpec.Number("drift_per_day", min: -1e-6, max: 1e-6) with { Optional = true },
+        KeySpec.NumberList("adev_tau_s", min: 0, max: 1e8, minInclusive: false),
+        KeySpec.NumberList("adev_sigma", min: 0, max: 1e-3, minInclusive: false),
+        KeySpec.Number("upload_jitter_s", min: 0, max: 86_400, defaultValue: 0) with
+        {
+            AllowedText = "0 <= upload_jitter_s <= upload_interval_h * 3600 / 10 (of every shell)",
+        },
+        KeySpec.Choice("upload_jitter_distribution", UniformJitter, UniformJitter, GaussianJitter),
+        KeySpec.Number("estimation_phase_sigma_ns", min: 0, max: 1e6, defaultValue: 1.0),
+        KeySpec.Number("estimation_frequency_sigma", min: 0, max: 1e-6, defaultValue: 1e-14),
     ]);
 
     public static readonly TableSpec Orbit = new("orbit", IsArray: false, Required: false,

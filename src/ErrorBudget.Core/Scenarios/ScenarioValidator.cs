@@ -24,11 +24,13 @@ internal static class ScenarioValidator
         var shells = ReadShells(tree, errors);
         var grid = ReadSingle(tree, ScenarioSchema.Grid, errors);
         GridRules.Check(grid, errors);
+        var clock = ReadSingle(tree, ScenarioSchema.Clock, errors);
+        ClockRules.Check(clock, run, shells, errors);
         var values = new ScenarioValues(
             run,
             shells,
             grid,
-            ReadSingle(tree, ScenarioSchema.Clock, errors),
+            clock,
             ReadSingle(tree, ScenarioSchema.Orbit, errors),
             ReadSingle(tree, ScenarioSchema.User, errors),
             ReadSingle(tree, ScenarioSchema.Assumed, errors))

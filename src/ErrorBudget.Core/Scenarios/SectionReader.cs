@@ -50,10 +50,15 @@ internal static class SectionReader
         {
             problem = key.RangeProblem(integer) is { } bound ? $"is out of range ({bound})" : null;
         }
+        else if (problem is null && value is double[] list)
+        {
+            problem = ListProblem(list, key);
+        }
 
         if (problem is not null)
         {
             errors.Key(entry.Line, path, entry.ValueText, problem, key.Allowed);
+            values.MarkInvalid(key.Name);
             return;
         }
 
@@ -84,6 +89,7 @@ internal static class SectionReader
                 when Rfc3339.TryParse(d.Token?.Text ?? "", out var t) => (t, null),
             _ => (null, "is not an RFC 3339 timestamp with a UTC offset"),
         },
+        KeyKind.NumberList => node is ArraySyntax array ? Numbers(array) : (null, "is not an array of numbers"),
         _ => node switch
         {
             StringValueSyntax s when !string.IsNullOrWhiteSpace(s.Value) && s.Value.Length <= KeySpec.MaxTextLength => (s.Value, null),
@@ -91,6 +97,46 @@ internal static class SectionReader
             _ => (null, "is not a string"),
         },
     };
+
+    private static (object? Value, string? Problem) Numbers(ArraySyntax array)
+    {
+        var items = new List<double>();
+        foreach (var item in array.Items)
+        {
+            switch (item.Value)
+            {
+                case IntegerValueSyntax i:
+                    items.Add(i.Value);
+                    break;
+                case FloatValueSyntax f when double.IsFinite(f.Value):
+                    items.Add(f.Value);
+                    break;
+                default:
+                    return (null, $"item {items.Count + 1} is not a finite number");
+            }
+        }
+
+        return (items.ToArray(), null);
+    }
+
+    /// <summary>Length 1 .. MaxListLength, every item in range (items counted from 1).</summary>
+    private static string? ListProblem(double[] list, KeySpec key)
+    {
+        if (list.Length is 0 or > KeySpec.MaxListLength)
+        {
+            return $"has {list.Length} items";
+        }
+
+        for (int i = 0; i < list.Length; i++)
+        {
+            if (key.RangeProblem(list[i]) is { } bound)
+            {
+                return $"item {i + 1} ({KeySpec.Format(list[i])}) is out of range ({bound})";
+            }
+        }
+
+        return null;
+    }
 
     private static object Normalise(KeySpec key, object fallback) => key.Kind switch
     {

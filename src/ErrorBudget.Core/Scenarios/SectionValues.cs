@@ -7,6 +7,7 @@ namespace ErrorBudget.Core.Scenarios;
 internal sealed class SectionValues(string path, int tableLine)
 {
     private readonly Dictionary<string, (object Value, int Line, string Text)> _values = new(StringComparer.Ordinal);
+    private readonly HashSet<string> _invalid = new(StringComparer.Ordinal);
 
     /// <summary>Key prefix: <c>grid</c>, <c>shell[2]</c>.</summary>
     public string Path { get; } = path;
@@ -18,11 +19,25 @@ internal sealed class SectionValues(string path, int tableLine)
 
     public bool Has(params string[] keys) => keys.All(_values.ContainsKey);
 
+    /// <summary>Records a key that was written but failed its own checks (already reported).</summary>
+    public void MarkInvalid(string key) => _invalid.Add(key);
+
+    /// <summary>True when the key was written, valid or not: rules about its presence should not report it again.</summary>
+    public bool Given(string key) => _values.ContainsKey(key) || _invalid.Contains(key);
+
+    /// <summary>True when the key was written but failed its own checks.</summary>
+    public bool IsInvalid(string key) => _invalid.Contains(key);
+
     public long Integer(string key) => (long)_values[key].Value;
 
     public double Number(string key) => (double)_values[key].Value;
 
     public string Text(string key) => (string)_values[key].Value;
+
+    public IReadOnlyList<double> Numbers(string key) => (double[])_values[key].Value;
+
+    /// <summary>True when the key was written in the file (present and not a default, which sits on the table line).</summary>
+    public bool Written(string key) => TableLine != 0 && _values.TryGetValue(key, out var v) && v.Line != TableLine;
 
     public DateTimeOffset Time(string key) => (DateTimeOffset)_values[key].Value;
 

@@ -31,4 +31,6 @@ public sealed record ShellSpec(
     /// for, metres, overriding [relativity] preset_semi_major_axis_km; NaN when not given.
     /// </summary>
     public double RelativityPresetSemiMajorAxisMeters { get; init; } = double.NaN;
+    /// <summary>The shell's own upload interval (s), overriding [clock] upload_interval_h; null: the [clock] value.</summary>
+    public double? UploadIntervalSeconds { get; init; }
 }

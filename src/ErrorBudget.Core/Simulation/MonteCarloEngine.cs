@@ -3,6 +3,7 @@ using System.Diagnostics;
 using System.Security.Cryptography;
 using System.Text;
 using System.Threading.Tasks.Dataflow;
+using ErrorBudget.Core.Clocks;
 using ErrorBudget.Core.Errors;
 using ErrorBudget.Core.Geodesy;
 using ErrorBudget.Core.Scenarios;
@@ -139,8 +140,20 @@ public static class MonteCarloEngine
             HashOf(scenario.SourceText), setup.Seed, setup.Trials, options.ToolVersion, threads, started, clock.Elapsed.TotalSeconds);
         // Relativity figures (issue 4): deterministic, computed once from the scenario.
         var relativity = Relativity.RelativityAnalysis.Build(scenario, ct);
-        return new RunResult(scenario, metadata, cellResults, epochs, global) { Relativity = relativity };
+        return new RunResult(scenario, metadata, cellResults, epochs, global)
+        {
+            Relativity = relativity,
+            // Clock grades (issue 3): the grade's model vs simulated ADEV, and the sampler's age-of-data statistics.
+            Clocks = MeasureClockGrade(scenario, setup),
+            AgeOfData = sampler.AgeOfDataRows(),
+        };
     }
+
+    /// <summary>Issue 3: the clocks.parquet rows of the scenario's grade (none for the simple clock model).</summary>
+    private static IReadOnlyList<ClockAdevRow> MeasureClockGrade(Scenario scenario, SimulationSetup setup) =>
+        scenario.Clock.Grade is { } grade
+            ? SimulatedAllanDeviation.Measure(grade, GradedClockModel.CreateSimulator(scenario), setup.Seed, setup.Epochs)
+            : [];
 
     /// <summary>SHA-256 of the scenario text, lower-case hex: the identity of a scenario in every output.</summary>
     public static string HashOf(string text) =>

@@ -1,4 +1,6 @@
 using ErrorBudget.Core.Relativity;
+using ErrorBudget.Core.Clocks;
+using ErrorBudget.Core.Errors;
 using ErrorBudget.Core.Scenarios;
 
 namespace ErrorBudget.Core.Simulation;
@@ -13,6 +15,11 @@ public sealed record RunResult(
 {
     /// <summary>relativity.parquet and the check report: per-satellite relativistic figures (issue 4).</summary>
     public RelativityReport Relativity { get; init; } = RelativityReport.Empty;
+    /// <summary>Model and simulated Allan deviation of the clock grade in use (empty for the simple clock model).</summary>
+    public IReadOnlyList<ClockAdevRow> Clocks { get; init; } = [];
+
+    /// <summary>Clock and orbit range errors by age of data (empty when the run drew no satellite errors).</summary>
+    public IReadOnlyList<AgeOfDataRow> AgeOfData { get; init; } = [];
 }
 
 /// <summary>Provenance of a run, written into every table's key-value metadata and the summary.</summary>

@@ -18,6 +18,8 @@ internal static class SchemaDocuments
         (FileName(CellsTable.Definition.Name), TableSchemaDocument.Build(CellsTable.Definition)),
         (FileName(EpochsTable.Definition.Name), TableSchemaDocument.Build(EpochsTable.Definition)),
         (FileName(RelativityTable.Definition.Name), TableSchemaDocument.Build(RelativityTable.Definition)),
+        (FileName(ClocksTable.Definition.Name), TableSchemaDocument.Build(ClocksTable.Definition)),
+        (FileName(AgeOfDataTable.Definition.Name), TableSchemaDocument.Build(AgeOfDataTable.Definition)),
         (FileName(SummaryDefinition.Name), SummarySchemaDocument.Build()),
     ];
 

@@ -10,6 +10,8 @@ public class WrittenTablesMatchSchemaTests
     [InlineData("cells")]
     [InlineData("epochs")]
     [InlineData("relativity")]
+    [InlineData("clocks")]
+    [InlineData("age_of_data")]
     public async Task Written_table_has_the_fields_order_and_types_of_its_table_schema(string name)
     {
         using var temp = new TempFolder();
@@ -33,6 +35,8 @@ public class WrittenTablesMatchSchemaTests
     [InlineData("cells")]
     [InlineData("epochs")]
     [InlineData("relativity")]
+    [InlineData("clocks")]
+    [InlineData("age_of_data")]
     public void Table_schema_fields_carry_a_description_and_numeric_fields_a_unit(string name)
     {
         using var schema = SchemaFiles.Load(name);
@@ -52,6 +56,8 @@ public class WrittenTablesMatchSchemaTests
     [InlineData("cells")]
     [InlineData("epochs")]
     [InlineData("relativity")]
+    [InlineData("clocks")]
+    [InlineData("age_of_data")]
     public async Task Written_values_respect_the_schema_constraints(string name)
     {
         using var temp = new TempFolder();

@@ -8,6 +8,8 @@ public class ParquetMetadataTests
     [InlineData(ResultSetLayout.CellsFileName, "cells")]
     [InlineData(ResultSetLayout.EpochsFileName, "epochs")]
     [InlineData(ResultSetLayout.RelativityFileName, "relativity")]
+    [InlineData(ResultSetLayout.ClocksFileName, "clocks")]
+    [InlineData(ResultSetLayout.AgeOfDataFileName, "age_of_data")]
     public async Task Every_table_carries_the_provenance_metadata_read_by_DuckDB(string fileName, string schemaName)
     {
         using var temp = new TempFolder();

@@ -1,4 +1,6 @@
 using ErrorBudget.Core.Relativity;
+using ErrorBudget.Core.Clocks;
+using ErrorBudget.Core.Errors;
 using ErrorBudget.Core.Scenarios;
 using ErrorBudget.Core.Simulation;
 
@@ -53,6 +55,22 @@ internal static class SyntheticRun
         new(2, 600, new DateTimeOffset(2031, 6, 1, 2, 10, 0, TimeSpan.FromHours(2)), 18, 2.0 / 18.0, 7.75, 1.625, 2.625, PercentileSet.Empty, new(2.5, 6.0, double.NaN, double.NaN)),
     ];
 
+    /// <summary>Three octaves of a rubidium-like grade at a 300 s step.</summary>
+    public static ClockAdevRow[] Clocks() =>
+    [
+        new("rubidium", 0, 300, 1.25e-13, 1.3125e-13, 8, 4),
+        new("rubidium", 1, 600, 9.375e-14, 8.75e-14, 8, 4),
+        new("rubidium", 2, 1200, 7.5e-14, 6.25e-14, 8, 4),
+    ];
+
+    /// <summary>Three age bins; the last is empty (all figures NaN), the second too small for a p95.</summary>
+    public static AgeOfDataRow[] AgeOfData() =>
+    [
+        new(0, 0, 14_400, 7_000, 40, 0.5, 0.875, 0.5625, 0.25, 0.375),
+        new(1, 14_400, 28_800, 21_000, 12, 0.75, double.NaN, 0.6875, 0.25, double.NaN),
+        new(2, 28_800, 43_200, double.NaN, 0, double.NaN, double.NaN, double.NaN, double.NaN, double.NaN),
+    ];
+
     public static RunMetadata Metadata() => new(
         ScenarioHash: "3f2a9c0d4b5e6f708192a3b4c5d6e7f8091a2b3c4d5e6f708192a3b4c5d6e7f8",
         Seed: Seed,
@@ -73,7 +91,12 @@ internal static class SyntheticRun
     public static RunResult Result() => With(Cells(), Epochs());
 
     public static RunResult With(IReadOnlyList<CellResult> cells, IReadOnlyList<EpochResult> epochs) =>
-        new(Scenario(), Metadata(), cells, epochs, Global()) { Relativity = new RelativityReport(Relativity(), new RelativityPositionFigures(0, default, default, default), 3) };
+        new(Scenario(), Metadata(), cells, epochs, Global())
+        {
+            Relativity = new RelativityReport(Relativity(), new RelativityPositionFigures(0, default, default, default), 3),
+            Clocks = Clocks(),
+            AgeOfData = AgeOfData(),
+        };
 
     /// <summary>Three satellites: made-up statistics; the last one never seen by a sampled user (user-level figures NaN).</summary>
     public static RelativitySatelliteFigures[] Relativity() =>
