@@ -94,10 +94,9 @@ internal static class TrialSampler
         var positive = Vector256.GreaterThan(x, minIndexable);
         var safe = Vector256.ConditionalSelect(positive, x, Vector256<double>.One);
         var k = Vector256.ConvertToInt64(Vector256.Ceiling(Vector256.Log(safe) * inverseLnGamma));
-        for (int i = 0; i < Vector256<double>.Count; i++)
-        {
-            keys[i] = positive.GetElement(i) != 0 ? (int)k.GetElement(i) : DDSketch.ZeroKey;
-        }
+        k = Vector256.ConditionalSelect(positive.AsInt64(), k, Vector256.Create((long)DDSketch.ZeroKey));
+        // Keys fit in 32 bits (|ln x| / ln gamma < 2^31 for every double): narrowing keeps them exactly.
+        Vector256.Narrow(k, k).GetLower().StoreUnsafe(ref MemoryMarshal.GetReference(keys));
     }
 
     /// <summary>The scalar twin of <see cref="SampleVector"/>: the same fused operations, one trial at a time.</summary>
