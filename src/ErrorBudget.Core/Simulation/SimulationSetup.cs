@@ -21,7 +21,7 @@ internal sealed class SimulationSetup
         Trials = scenario.Run.Trials;
         BlockCapacity = Math.Min(Trials, options.TrialBlock);
         Blocks = (Trials + BlockCapacity - 1) / BlockCapacity;
-        LaneCapacity = (BlockCapacity + Lanes - 1) / Lanes * Lanes;
+        LaneCapacity = (BlockCapacity + NormalBatch - 1) / NormalBatch * NormalBatch;
         StartRotationAngleRad = EarthRotation.EarthRotationAngle(scenario.Run.StartUtc);
         Weights = AreaWeights.For(Grid, (long)Epochs * Trials);
         var tiles = new List<Tile>();
@@ -42,7 +42,7 @@ internal sealed class SimulationSetup
     public int BlockCapacity { get; }
     public int Blocks { get; }
 
-    /// <summary>Trials per block rounded up to whole vectors: the kernel computes padded lanes and discards them.</summary>
+    /// <summary>Trials per block rounded up to whole normal batches: the kernel computes padded lanes and discards them.</summary>
     public int LaneCapacity { get; }
 
     /// <summary>Epochs a tile job covers in a row (cache reuse of the tile's cell sketches).</summary>
@@ -50,6 +50,12 @@ internal sealed class SimulationSetup
 
     /// <summary>Trials per vector in the kernel (Vector256 of double).</summary>
     public const int Lanes = 4;
+
+    /// <summary>
+    /// Normals the vector generator makes per step (four Box-Muller pairs). Blocks are padded to a
+    /// multiple of it so no user-level normal falls to the generator's slower scalar tail.
+    /// </summary>
+    public const int NormalBatch = 8;
     public double StartRotationAngleRad { get; }
     public AreaWeights Weights { get; }
     public IReadOnlyList<Tile> Tiles { get; }

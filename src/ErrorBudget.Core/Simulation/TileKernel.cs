@@ -102,7 +102,7 @@ internal sealed class TileKernel
         CommonOffset(m, work, cell, s);
 
         int trials = work.BlockTrials;
-        int lanes = (trials + SimulationSetup.Lanes - 1) / SimulationSetup.Lanes * SimulationSetup.Lanes;
+        int lanes = (trials + SimulationSetup.NormalBatch - 1) / SimulationSetup.NormalBatch * SimulationSetup.NormalBatch;
         FillUserNormals(_seed, work.Epoch, cell.Index, work.FirstTrial, _simd ? lanes : trials, s);
         if (_simd && TrialSampler.VectorPathAvailable)
         {
