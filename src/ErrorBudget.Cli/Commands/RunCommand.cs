@@ -18,7 +18,7 @@ internal static class RunCommand
         var threads = CommonOptions.Threads();
         var force = new Option<bool>("--force", "-f") { Description = "Replace an existing result-set folder." };
         var quiet = CommonOptions.Quiet();
-        var command = new Command("run", "Run the scenario and write its result set (cells.parquet, epochs.parquet, summary.json).")
+        var command = new Command("run", "Run the scenario and write its result set (cells, epochs, relativity, clocks and age_of_data Parquet tables, summary.json).")
         {
             scenario, output, trials, seed, threads, force, quiet,
         };
