@@ -81,10 +81,8 @@ internal static class TrialSampler
     {
         ReadOnlySpan<int> h = s.KeysH.AsSpan(0, trials);
         ReadOnlySpan<int> v = s.KeysV.AsSpan(0, trials);
-        acc.Hpe.AddKeys(h, 1);
-        acc.Vpe.AddKeys(v, 1);
-        s.Hpe.AddKeys(h, weight);
-        s.Vpe.AddKeys(v, weight);
+        DDSketch.AddKeysToBoth(h, acc.Hpe, 1, s.Hpe, weight);
+        DDSketch.AddKeysToBoth(v, acc.Vpe, 1, s.Vpe, weight);
     }
 
     /// <summary>Sketch keys ceil(ln x / ln gamma) of four values, the zero key at or below MinIndexable.</summary>

@@ -102,6 +102,55 @@ public sealed partial class DDSketch
         count += keys.Length * weight;
     }
 
+    /// <summary>
+    /// Adds the same keys to two sketches with their own weights, in one pass (as <see cref="AddKeys"/>
+    /// on each): the hot loop's cell sketch (weight 1) and epoch share (area weight) see the same samples.
+    /// </summary>
+    public static void AddKeysToBoth(ReadOnlySpan<int> keys, DDSketch first, long firstWeight, DDSketch second, long secondWeight)
+    {
+        ArgumentNullException.ThrowIfNull(first);
+        ArgumentNullException.ThrowIfNull(second);
+        int lo = int.MaxValue, hi = int.MinValue;
+        long zeros = 0;
+        foreach (int key in keys)
+        {
+            if (key == ZeroKey)
+            {
+                zeros++;
+                continue;
+            }
+
+            lo = Math.Min(lo, key);
+            hi = Math.Max(hi, key);
+        }
+
+        if (lo <= hi)
+        {
+            first.EnsureRange(lo, hi);
+            second.EnsureRange(lo, hi);
+            first.minKey = Math.Min(first.minKey, lo);
+            first.maxKey = Math.Max(first.maxKey, hi);
+            second.minKey = Math.Min(second.minKey, lo);
+            second.maxKey = Math.Max(second.maxKey, hi);
+            ref long a0 = ref System.Runtime.InteropServices.MemoryMarshal.GetArrayDataReference(first.counts);
+            ref long b0 = ref System.Runtime.InteropServices.MemoryMarshal.GetArrayDataReference(second.counts);
+            int aShift = first.offset, bShift = second.offset;
+            foreach (int key in keys)
+            {
+                if (key != ZeroKey)
+                {
+                    Unsafe.Add(ref a0, key - aShift) += firstWeight;
+                    Unsafe.Add(ref b0, key - bShift) += secondWeight;
+                }
+            }
+        }
+
+        first.zeroCount += zeros * firstWeight;
+        second.zeroCount += zeros * secondWeight;
+        first.count += keys.Length * firstWeight;
+        second.count += keys.Length * secondWeight;
+    }
+
     /// <summary>The rare slow path of <see cref="AddKey"/>, kept out of line so the hot path inlines.</summary>
     [MethodImpl(MethodImplOptions.NoInlining)]
     private int GrowFor(int key)
