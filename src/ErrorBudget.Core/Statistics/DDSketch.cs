@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using System.Runtime.CompilerServices;
 
 namespace ErrorBudget.Core.Statistics;
@@ -68,26 +69,11 @@ public sealed partial class DDSketch
     /// </summary>
     public void AddKeys(ReadOnlySpan<int> keys, long weight)
     {
-        int lo = int.MaxValue, hi = int.MinValue;
-        long zeros = 0;
-        foreach (int key in keys)
-        {
-            if (key == ZeroKey)
-            {
-                zeros++;
-                continue;
-            }
-
-            lo = Math.Min(lo, key);
-            hi = Math.Max(hi, key);
-        }
-
+        ScanKeys(keys, out int lo, out int hi, out long zeros);
         if (lo <= hi)
         {
-            EnsureRange(lo, hi);
-            minKey = Math.Min(minKey, lo);
-            maxKey = Math.Max(maxKey, hi);
-            ref long bucket0 = ref System.Runtime.InteropServices.MemoryMarshal.GetArrayDataReference(counts);
+            ReserveKeys(lo, hi);
+            ref long bucket0 = ref MemoryMarshal.GetArrayDataReference(counts);
             int shift = offset;
             foreach (int key in keys)
             {
@@ -98,8 +84,7 @@ public sealed partial class DDSketch
             }
         }
 
-        zeroCount += zeros * weight;
-        count += keys.Length * weight;
+        AddTotals(keys.Length, zeros, weight);
     }
 
     /// <summary>
@@ -110,30 +95,13 @@ public sealed partial class DDSketch
     {
         ArgumentNullException.ThrowIfNull(first);
         ArgumentNullException.ThrowIfNull(second);
-        int lo = int.MaxValue, hi = int.MinValue;
-        long zeros = 0;
-        foreach (int key in keys)
-        {
-            if (key == ZeroKey)
-            {
-                zeros++;
-                continue;
-            }
-
-            lo = Math.Min(lo, key);
-            hi = Math.Max(hi, key);
-        }
-
+        ScanKeys(keys, out int lo, out int hi, out long zeros);
         if (lo <= hi)
         {
-            first.EnsureRange(lo, hi);
-            second.EnsureRange(lo, hi);
-            first.minKey = Math.Min(first.minKey, lo);
-            first.maxKey = Math.Max(first.maxKey, hi);
-            second.minKey = Math.Min(second.minKey, lo);
-            second.maxKey = Math.Max(second.maxKey, hi);
-            ref long a0 = ref System.Runtime.InteropServices.MemoryMarshal.GetArrayDataReference(first.counts);
-            ref long b0 = ref System.Runtime.InteropServices.MemoryMarshal.GetArrayDataReference(second.counts);
+            first.ReserveKeys(lo, hi);
+            second.ReserveKeys(lo, hi);
+            ref long a0 = ref MemoryMarshal.GetArrayDataReference(first.counts);
+            ref long b0 = ref MemoryMarshal.GetArrayDataReference(second.counts);
             int aShift = first.offset, bShift = second.offset;
             foreach (int key in keys)
             {
@@ -145,10 +113,41 @@ public sealed partial class DDSketch
             }
         }
 
-        first.zeroCount += zeros * firstWeight;
-        second.zeroCount += zeros * secondWeight;
-        first.count += keys.Length * firstWeight;
-        second.count += keys.Length * secondWeight;
+        first.AddTotals(keys.Length, zeros, firstWeight);
+        second.AddTotals(keys.Length, zeros, secondWeight);
+    }
+
+    /// <summary>Lowest and highest non-zero key of a span (empty: lo &gt; hi) and how many zero keys it holds.</summary>
+    private static void ScanKeys(ReadOnlySpan<int> keys, out int lo, out int hi, out long zeros)
+    {
+        lo = int.MaxValue;
+        hi = int.MinValue;
+        zeros = 0;
+        foreach (int key in keys)
+        {
+            if (key == ZeroKey)
+            {
+                zeros++;
+                continue;
+            }
+
+            lo = Math.Min(lo, key);
+            hi = Math.Max(hi, key);
+        }
+    }
+
+    /// <summary>Makes [lo, hi] addressable and widens the seen range to it.</summary>
+    private void ReserveKeys(int lo, int hi)
+    {
+        EnsureRange(lo, hi);
+        minKey = Math.Min(minKey, lo);
+        maxKey = Math.Max(maxKey, hi);
+    }
+
+    private void AddTotals(int keyCount, long zeros, long weight)
+    {
+        zeroCount += zeros * weight;
+        count += keyCount * weight;
     }
 
     /// <summary>The rare slow path of <see cref="AddKey"/>, kept out of line so the hot path inlines.</summary>
