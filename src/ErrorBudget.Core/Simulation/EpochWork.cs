@@ -19,6 +19,28 @@ internal sealed class EpochWork(int satellites, int laneCapacity)
 
     public SatelliteState[] States { get; } = new SatelliteState[satellites];
 
+    /// <summary>
+    /// ECEF satellite positions as three coordinate arrays (structure of arrays), padded to whole
+    /// Vector256 widths with the Earth's centre, which no user sees above a non-negative mask; filled by
+    /// <see cref="FillPositions"/> for the kernel's vectorised visibility test.
+    /// </summary>
+    public double[] PositionX { get; } = new double[PaddedLength(satellites)];
+    public double[] PositionY { get; } = new double[PaddedLength(satellites)];
+    public double[] PositionZ { get; } = new double[PaddedLength(satellites)];
+
+    /// <summary>Copies the states' ECEF positions into the coordinate arrays.</summary>
+    public void FillPositions()
+    {
+        for (int i = 0; i < States.Length; i++)
+        {
+            PositionX[i] = States[i].PositionEcef.X;
+            PositionY[i] = States[i].PositionEcef.Y;
+            PositionZ[i] = States[i].PositionEcef.Z;
+        }
+    }
+
+    private static int PaddedLength(int satellites) => (satellites + 3) / 4 * 4;
+
     /// <summary>See <see cref="Errors.SatelliteErrorSampler"/> for the layout.</summary>
     public double[] SatelliteErrors { get; } = new double[satellites * laneCapacity * Errors.SatelliteErrorSampler.Components];
 }

@@ -169,6 +169,7 @@ public static class MonteCarloEngine
         w.BlockTrials = Math.Min(setup.BlockCapacity, setup.Trials - w.FirstTrial);
         w.IsFirstBlock = block == 0;
         setup.Constellation.Propagate(t, setup.StartRotationAngleRad, w.States);
+        w.FillPositions();
         sampler.Sample(epoch, t, w.RotationAngleRad, w.States, w.FirstTrial, w.BlockTrials, setup.LaneCapacity, w.SatelliteErrors);
     }
 

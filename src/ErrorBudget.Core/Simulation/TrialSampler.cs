@@ -91,7 +91,7 @@ internal static class TrialSampler
     {
         var positive = Vector256.GreaterThan(x, minIndexable);
         var safe = Vector256.ConditionalSelect(positive, x, Vector256<double>.One);
-        var k = Vector256.ConvertToInt64(Vector256.Ceiling(Vector256.Log(safe) * inverseLnGamma));
+        var k = Vector256.ConvertToInt64(Vector256.Ceiling(Random.FastMath256.LogOfPositive(safe) * inverseLnGamma));
         k = Vector256.ConditionalSelect(positive.AsInt64(), k, Vector256.Create((long)DDSketch.ZeroKey));
         // Keys fit in 32 bits (|ln x| / ln gamma < 2^31 for every double): narrowing keeps them exactly.
         Vector256.Narrow(k, k).GetLower().StoreUnsafe(ref MemoryMarshal.GetReference(keys));
@@ -127,7 +127,7 @@ internal static class TrialSampler
             u = Math.FusedMultiplyAdd(l[6], z0, Math.FusedMultiplyAdd(l[7], z1, Math.FusedMultiplyAdd(l[8], z2, u)));
 
             // The same operations in the same order as the vector twin: identical values, only the
-            // logarithm of the sketch key may differ in the last bit.
+            // logarithm of the sketch key may differ in the last bits (FastMath256 vs Math.Log).
             s.KeysH[j] = mapping.KeyOf(Math.Sqrt(Math.FusedMultiplyAdd(e, e, n * n)));
             s.KeysV[j] = mapping.KeyOf(Math.Abs(u));
         }
