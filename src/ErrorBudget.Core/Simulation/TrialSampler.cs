@@ -9,8 +9,8 @@ namespace ErrorBudget.Core.Simulation;
 /// The hot loop over the trials of one (epoch, user): position error from the satellite-level
 /// errors through the coefficients, plus the user-level part L z, then HPE and VPE into the
 /// cell's and the epoch's sketches. Two twins give the same answers (a test holds them to it):
-/// <see cref="SampleVector"/> computes four trials per Vector256 (lanes = trials, the padded lanes
-/// of the last vector are computed and discarded), <see cref="SampleScalar"/> one at a time.
+/// <see cref="SampleVector"/> computes eight trials per step in two Vector256 (lanes = trials, the
+/// padded lanes of the last step are computed and discarded), <see cref="SampleScalar"/> one at a time.
 /// </summary>
 internal static class TrialSampler
 {
@@ -39,41 +39,65 @@ internal static class TrialSampler
         var n0 = Vector256.Create(s.CommonOffset[1]);
         var u0 = Vector256.Create(s.CommonOffset[2]);
 
-        for (int j = 0; j < trials; j += Vector256<double>.Count)
+        // Two vectors (eight trials) per step: the satellite loop's coefficient broadcasts are shared
+        // and two independent accumulation chains hide the multiply-add latency. Blocks are padded to
+        // whole normal batches (8), so the padded lanes are there to compute and discard.
+        for (int j = 0; j < trials; j += 2 * Vector256<double>.Count)
         {
-            var e = e0;
-            var n = n0;
-            var u = u0;
+            var ea = e0;
+            var na = n0;
+            var ua = u0;
+            var eb = e0;
+            var nb = n0;
+            var ub = u0;
             for (int i = 0; i < m; i++)
             {
                 int b = visible[i] * 4 * stride + j;
-                var x0 = Vector256.LoadUnsafe(ref err, (nuint)b);
-                var x1 = Vector256.LoadUnsafe(ref err, (nuint)(b + stride));
-                var x2 = Vector256.LoadUnsafe(ref err, (nuint)(b + 2 * stride));
-                var x3 = Vector256.LoadUnsafe(ref err, (nuint)(b + 3 * stride));
                 ref double c = ref Unsafe.Add(ref coef, i * 8);
-                var range = Vector256.FusedMultiplyAdd(x0, Vector256.Create(c), x3);
-                range = Vector256.FusedMultiplyAdd(x1, Vector256.Create(Unsafe.Add(ref c, 1)), range);
-                range = Vector256.FusedMultiplyAdd(x2, Vector256.Create(Unsafe.Add(ref c, 2)), range);
-                e = Vector256.FusedMultiplyAdd(range, Vector256.Create(Unsafe.Add(ref c, 3)), e);
-                n = Vector256.FusedMultiplyAdd(range, Vector256.Create(Unsafe.Add(ref c, 4)), n);
-                u = Vector256.FusedMultiplyAdd(range, Vector256.Create(Unsafe.Add(ref c, 5)), u);
+                var cx = Vector256.Create(c);
+                var cy = Vector256.Create(Unsafe.Add(ref c, 1));
+                var cz = Vector256.Create(Unsafe.Add(ref c, 2));
+                var rangeA = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref err, (nuint)b), cx, Vector256.LoadUnsafe(ref err, (nuint)(b + 3 * stride)));
+                var rangeB = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref err, (nuint)(b + 4)), cx, Vector256.LoadUnsafe(ref err, (nuint)(b + 3 * stride + 4)));
+                rangeA = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref err, (nuint)(b + stride)), cy, rangeA);
+                rangeB = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref err, (nuint)(b + stride + 4)), cy, rangeB);
+                rangeA = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref err, (nuint)(b + 2 * stride)), cz, rangeA);
+                rangeB = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref err, (nuint)(b + 2 * stride + 4)), cz, rangeB);
+                var se = Vector256.Create(Unsafe.Add(ref c, 3));
+                var sn = Vector256.Create(Unsafe.Add(ref c, 4));
+                var su = Vector256.Create(Unsafe.Add(ref c, 5));
+                ea = Vector256.FusedMultiplyAdd(rangeA, se, ea);
+                eb = Vector256.FusedMultiplyAdd(rangeB, se, eb);
+                na = Vector256.FusedMultiplyAdd(rangeA, sn, na);
+                nb = Vector256.FusedMultiplyAdd(rangeB, sn, nb);
+                ua = Vector256.FusedMultiplyAdd(rangeA, su, ua);
+                ub = Vector256.FusedMultiplyAdd(rangeB, su, ub);
             }
 
-            var z0 = Vector256.LoadUnsafe(ref z, (nuint)j);
-            var z1 = Vector256.LoadUnsafe(ref z, (nuint)(stride + j));
-            var z2 = Vector256.LoadUnsafe(ref z, (nuint)(2 * stride + j));
-            e = Vector256.FusedMultiplyAdd(l0, z0, e);
-            n = Vector256.FusedMultiplyAdd(l3, z0, Vector256.FusedMultiplyAdd(l4, z1, n));
-            u = Vector256.FusedMultiplyAdd(l6, z0, Vector256.FusedMultiplyAdd(l7, z1, Vector256.FusedMultiplyAdd(l8, z2, u)));
-
-            var hpe = Vector256.Sqrt(Vector256.FusedMultiplyAdd(e, e, n * n));
-            var vpe = Vector256.Abs(u);
-            VectorKeys(hpe, inverseLnGamma, minIndexable, keysH.Slice(j, Vector256<double>.Count));
-            VectorKeys(vpe, inverseLnGamma, minIndexable, keysV.Slice(j, Vector256<double>.Count));
+            Finish(ea, na, ua, ref z, j, stride, l0, l3, l4, l6, l7, l8, inverseLnGamma, minIndexable, keysH, keysV);
+            Finish(eb, nb, ub, ref z, j + 4, stride, l0, l3, l4, l6, l7, l8, inverseLnGamma, minIndexable, keysH, keysV);
         }
 
         AddAll(acc, weight, s, trials);
+    }
+
+    /// <summary>Adds L z to four trials' satellite-level position errors and writes their HPE and VPE sketch keys.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static void Finish(
+        Vector256<double> e, Vector256<double> n, Vector256<double> u, ref double z, int j, int stride,
+        Vector256<double> l0, Vector256<double> l3, Vector256<double> l4, Vector256<double> l6, Vector256<double> l7, Vector256<double> l8,
+        Vector256<double> inverseLnGamma, Vector256<double> minIndexable, Span<int> keysH, Span<int> keysV)
+    {
+        var z0 = Vector256.LoadUnsafe(ref z, (nuint)j);
+        var z1 = Vector256.LoadUnsafe(ref z, (nuint)(stride + j));
+        var z2 = Vector256.LoadUnsafe(ref z, (nuint)(2 * stride + j));
+        e = Vector256.FusedMultiplyAdd(l0, z0, e);
+        n = Vector256.FusedMultiplyAdd(l3, z0, Vector256.FusedMultiplyAdd(l4, z1, n));
+        u = Vector256.FusedMultiplyAdd(l6, z0, Vector256.FusedMultiplyAdd(l7, z1, Vector256.FusedMultiplyAdd(l8, z2, u)));
+        var hpe = Vector256.Sqrt(Vector256.FusedMultiplyAdd(e, e, n * n));
+        var vpe = Vector256.Abs(u);
+        VectorKeys(hpe, inverseLnGamma, minIndexable, keysH.Slice(j, Vector256<double>.Count));
+        VectorKeys(vpe, inverseLnGamma, minIndexable, keysV.Slice(j, Vector256<double>.Count));
     }
 
     /// <summary>The block's keys into the cell's sketches (weight 1) and the epoch share (area weight); padded lanes are left out.</summary>
