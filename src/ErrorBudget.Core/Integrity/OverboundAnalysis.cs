@@ -8,7 +8,8 @@ namespace ErrorBudget.Core.Integrity;
 /// </summary>
 /// <remarks>
 /// <para><b>Definition</b> (B. DeCleene, "Defining pseudorange integrity - overbounding", ION GPS 2000):
-/// G overbounds F when G(x) &gt;= F(x) for all x &lt;= 0 and G(x) &lt;= F(x) for all x &gt;= 0. With
+/// G overbounds F when G(x) &gt;= F(x) for all x &lt;= 0 and G(x) &lt;= F(x) for all x &gt;= 0 (from memory,
+/// as the definition is commonly restated; not checked against the paper here). With
 /// G(x) = Phi(x / k) and Phi monotone this is x / k &gt;= Phi^-1(F(x)) for x &lt; 0 and x / k &lt;= Phi^-1(F(x))
 /// for x &gt; 0; both read k &gt;= k(x) = x / Phi^-1(F(x)) when Phi^-1(F(x)) has the sign of x. When it
 /// has the other sign (F(x) &gt; 1/2 at some x &lt; 0, or F(x) &lt; 1/2 at some x &gt; 0) no k works:
