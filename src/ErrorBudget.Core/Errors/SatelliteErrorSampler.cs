@@ -49,6 +49,7 @@ public sealed class SatelliteErrorSampler
     private readonly RelativisticClockError _relativity;
     private readonly SatelliteClockBank? _clocks;
     private readonly AgeOfDataAccumulator _ageOfData;
+    private readonly FaultInjector? _faults;
 
     public SatelliteErrorSampler(Scenario scenario, ulong seed)
     {
@@ -61,6 +62,7 @@ public sealed class SatelliteErrorSampler
         Schedule = new UploadSchedule(scenario, seed);
         _clocks = _clock.IsGraded ? new SatelliteClockBank(scenario, Schedule, seed) : null;
         _ageOfData = new AgeOfDataAccumulator(Schedule.MaxAgeSeconds);
+        _faults = scenario.Faults is { IsActive: true } f ? new FaultInjector(f, scenario.Shells, seed) : null;
     }
 
     /// <summary>
@@ -99,8 +101,25 @@ public sealed class SatelliteErrorSampler
         int firstTrial,
         int blockTrials,
         int stride,
-        Span<double> errors)
+        Span<double> errors) => Sample(epoch, timeSeconds, rotationAngleRad, states, firstTrial, blockTrials, stride, errors, []);
+
+    /// <summary>
+    /// As above; with [faults], also adds the injected faults and marks faulted (satellite, trial)
+    /// pairs in <paramref name="faulted"/> at [satellite * stride + trial] (cleared first; may be empty
+    /// when the caller does not need the marks).
+    /// </summary>
+    public void Sample(
+        int epoch,
+        double timeSeconds,
+        double rotationAngleRad,
+        ReadOnlySpan<SatelliteState> states,
+        int firstTrial,
+        int blockTrials,
+        int stride,
+        Span<double> errors,
+        Span<bool> faulted)
     {
+        faulted.Clear();
         _clocks?.AdvanceTo(epoch, firstTrial, blockTrials);
         const double lightSpeed = PhysicalConstants.SpeedOfLight;
         Span<double> z = stackalloc double[3];
@@ -151,6 +170,27 @@ public sealed class SatelliteErrorSampler
                 for (int j = 0; j < blockTrials; j++)
                 {
                     errors[IndexOf(s, 3, j, stride)] += relativity;
+                }
+            }
+
+            // Faults (issue 5): steps, ramps and orbit faults on top of the nominal errors.
+            if (_faults is not null)
+            {
+                for (int j = 0; j < blockTrials; j++)
+                {
+                    if (!_faults.Active(firstTrial + j, s, timeSeconds, out double clockFault, out Vec3 orbitFault))
+                    {
+                        continue;
+                    }
+
+                    errors[IndexOf(s, 0, j, stride)] += orbitFault.X * r.X + orbitFault.Y * a.X + orbitFault.Z * c.X;
+                    errors[IndexOf(s, 1, j, stride)] += orbitFault.X * r.Y + orbitFault.Y * a.Y + orbitFault.Z * c.Y;
+                    errors[IndexOf(s, 2, j, stride)] += orbitFault.X * r.Z + orbitFault.Y * a.Z + orbitFault.Z * c.Z;
+                    errors[IndexOf(s, 3, j, stride)] += clockFault;
+                    if (!faulted.IsEmpty)
+                    {
+                        faulted[(s * stride) + j] = true;
+                    }
                 }
             }
         }

@@ -5,6 +5,11 @@ internal static class RunRules
 {
     public static void Check(SectionValues run, ScenarioErrorList errors)
     {
+        if (run.Has("batches", "trials") && run.Integer("batches") > run.Integer("trials"))
+        {
+            run.Fail(errors, "batches", $"is more than {run.Describe("trials")}", $"1 <= batches <= {run.Integer("trials")}");
+        }
+
         if (!run.Has("duration_h", "step_s"))
         {
             return;

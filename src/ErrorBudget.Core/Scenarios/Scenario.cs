@@ -23,5 +23,14 @@ public sealed record Scenario(
     /// <summary>[relativity]: which relativistic terms are applied (default: all, in full).</summary>
     public RelativitySpec Relativity { get; init; } = RelativitySpec.AllApplied;
 
+    /// <summary>[integrity]: service, alert limits and protection-level algorithm; null without the table.</summary>
+    public IntegritySpec? Integrity { get; init; }
+
+    /// <summary>[faults]: injected truth faults; null without the table.</summary>
+    public FaultSpec? Faults { get; init; }
+
+    /// <summary>[run] batches: independent trial batches for the batch-means confidence intervals (1: none).</summary>
+    public int Batches { get; init; } = 1;
+
     public int TotalSatellites => Shells.Sum(s => s.Satellites);
 }

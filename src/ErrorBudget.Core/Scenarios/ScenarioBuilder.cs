@@ -5,11 +5,13 @@ internal static class ScenarioBuilder
 {
     private const double MetersPerKilometer = 1000.0;
     private const double SecondsPerHour = 3600.0;
+    private const int DefaultBatches = 10;
 
     public static Scenario Build(ScenarioValues v)
     {
         var user = User(v.User, fallback: null);
         var run = Run(v.Run);
+        var assumed = new AssumedModelSpec(v.Assumed.Number("ure_sigma_m"), User(v.Assumed, fallback: user));
         return new Scenario(
             run,
             [.. v.Shells.Select(Shell)],
@@ -17,9 +19,12 @@ internal static class ScenarioBuilder
             Clock(v.Clock, run.StepSeconds),
             new OrbitErrorSpec(v.Orbit.Number("radial_sigma_m"), v.Orbit.Number("along_sigma_m"), v.Orbit.Number("cross_sigma_m")),
             user,
-            new AssumedModelSpec(v.Assumed.Number("ure_sigma_m"), User(v.Assumed, fallback: user)))
+            assumed)
         {
             Relativity = v.Relativity is null ? RelativitySpec.AllApplied : RelativityKeys.Build(v.Relativity),
+            Integrity = v.Integrity is null ? null : IntegrityKeys.BuildIntegrity(v.Integrity, assumed.UreSigmaMeters),
+            Faults = v.Faults is null ? null : IntegrityKeys.BuildFaults(v.Faults),
+            Batches = v.Run.Has("batches") ? (int)v.Run.Integer("batches") : Math.Min(DefaultBatches, run.Trials),
         };
     }
 

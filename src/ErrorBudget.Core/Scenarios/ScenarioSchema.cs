@@ -31,6 +31,7 @@ internal static class ScenarioSchema
         new KeySpec("start_utc", KeyKind.Timestamp) { Default = DefaultStartUtc },
         KeySpec.Number("duration_h", min: 0, max: 720, minInclusive: false),
         KeySpec.Number("step_s", min: 1) with { AllowedText = "1 <= step_s <= duration_h * 3600, at most 100000 epochs" },
+        KeySpec.Integer("batches", min: 1, max: 100) with { Optional = true, AllowedText = "integer 1 <= batches <= 100 and <= trials (default: 10, or trials if fewer)" },
     ]);
 
     public static readonly TableSpec Shell = new("shell", IsArray: true, Required: true,
@@ -134,7 +135,8 @@ internal static class ScenarioSchema
 
     public static readonly TableSpec Relativity = RelativityKeys.Table;
 
-    public static readonly IReadOnlyList<TableSpec> Tables = [Run, Shell, Grid, Clock, Orbit, User, Assumed, Relativity];
+    public static readonly IReadOnlyList<TableSpec> Tables =
+        [Run, Shell, Grid, Clock, Orbit, User, Assumed, Relativity, IntegrityKeys.Integrity, IntegrityKeys.Faults];
 
     public static string TableList => string.Join(", ", Tables.Select(t => t.Written));
 

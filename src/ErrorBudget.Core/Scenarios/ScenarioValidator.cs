@@ -38,7 +38,12 @@ internal static class ScenarioValidator
             Relativity = ReadSingle(tree, ScenarioSchema.Relativity, errors),
         };
         RelativityRules.Check(values.Relativity, shells, tree, errors);
-        return values;
+        bool hasIntegrity = tree.Sections.Exists(s => s.Name == IntegrityKeys.Integrity.Name);
+        bool hasFaults = tree.Sections.Exists(s => s.Name == IntegrityKeys.Faults.Name);
+        var integrity = ReadSingle(tree, IntegrityKeys.Integrity, errors);
+        var faults = ReadSingle(tree, IntegrityKeys.Faults, errors);
+        IntegrityKeys.Check(integrity, faults, hasIntegrity, errors);
+        return values with { Integrity = hasIntegrity ? integrity : null, Faults = hasFaults ? faults : null };
     }
 
     private static void CheckHeader(TomlSection section, ScenarioErrorList errors)

@@ -12,4 +12,10 @@ internal sealed record ScenarioValues(
 {
     /// <summary>[relativity] (defaults only when the table is left out).</summary>
     public SectionValues? Relativity { get; init; }
+
+    /// <summary>[integrity] values, or null when the scenario has no such table.</summary>
+    public SectionValues? Integrity { get; init; }
+
+    /// <summary>[faults] values, or null when the scenario has no such table.</summary>
+    public SectionValues? Faults { get; init; }
 }
