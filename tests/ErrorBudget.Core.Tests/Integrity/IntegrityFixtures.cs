@@ -14,6 +14,16 @@ internal static class IntegrityFixtures
         return new Vec3(Math.Cos(el) * Math.Sin(az), Math.Cos(el) * Math.Cos(az), Math.Sin(el));
     }
 
+    /// <summary>
+    /// Five satellites (azimuth °, elevation °, σ m) chosen by hand, deliberately asymmetric so that d_EN is far from zero.
+    /// </summary>
+    public static readonly (double Az, double El, double Sigma)[] HandPickedSky =
+        [(30, 70, 0.8), (100, 35, 1.2), (190, 20, 2.0), (260, 50, 1.0), (330, 10, 3.0)];
+
+    public static Vec3[] HandPickedLinesOfSight() => HandPickedSky.Select(s => LineOfSight(s.Az, s.El)).ToArray();
+
+    public static double[] HandPickedWeights() => HandPickedSky.Select(s => 1.0 / (s.Sigma * s.Sigma)).ToArray();
+
     /// <summary>m satellites, azimuth uniform in [0°, 360°), elevation uniform in [5°, 90°].</summary>
     public static Vec3[] RandomSky(System.Random rng, int m) =>
         Enumerable.Range(0, m).Select(_ => LineOfSight(360.0 * rng.NextDouble(), 5.0 + (85.0 * rng.NextDouble()))).ToArray();

@@ -41,11 +41,8 @@ public class WeightedProtectionLevelsTests
     [Fact]
     public void Five_satellite_weighted_geometry_matches_an_independent_matrix_computation()
     {
-        // Sky and σᵢ chosen by hand, deliberately asymmetric so that d_EN is far from zero.
-        (double Az, double El, double Sigma)[] sky =
-            [(30, 70, 0.8), (100, 35, 1.2), (190, 20, 2.0), (260, 50, 1.0), (330, 10, 3.0)];
-        var los = sky.Select(s => IntegrityFixtures.LineOfSight(s.Az, s.El)).ToArray();
-        var weights = sky.Select(s => 1.0 / (s.Sigma * s.Sigma)).ToArray();
+        var los = IntegrityFixtures.HandPickedLinesOfSight();
+        var weights = IntegrityFixtures.HandPickedWeights();
         double[] tool = IntegrityFixtures.Covariance(los, weights);
 
         // Independent: D = (GᵀWG)⁻¹ by MathNet's general inverse; d_major² = largest eigenvalue of the E/N block
