@@ -14,8 +14,8 @@ namespace ErrorBudget.Core.Integrity;
 /// <para>At the edges the bounds have closed forms (derived from (1 − p)ⁿ and pⁿ): k = 0 gives
 /// upper = 1 − (α/2)^(1/n) and k = n gives lower = (α/2)^(1/n); they are evaluated with an accurate expm1, so
 /// 3.7/n at n = 1e9 keeps full relative precision (MathNet 5.0.0's Expm1 was measured 2e-9 off at −3.7e-3).</para>
-/// <para>Why not <c>Beta.InvCDF</c>: MathNet 5.0.0 solves it with Brent to an absolute accuracy of 1e-8
-/// (its own remark: "slow and unreliable"), which is a 10 % error on a rate of 1e-7. The bounds here invert
+/// <para>Why not <c>Beta.InvCDF</c>: MathNet solves it with Brent at an absolute accuracy of 1e-8 (read in its
+/// source, which remarks "slow and unreliable"), a stopping width of 5e-9: 5 % of a rate of 1e-7. The bounds here invert
 /// MathNet's Beta CDF (<see cref="Beta.CDF"/>, the regularised incomplete beta) by bisection on ln p, to a
 /// relative accuracy of 1e-13; the result is then limited by that CDF (about 1e-6 relative at n = 1e9,
 /// where ln Γ(n) is formed from numbers near n ln n). Each bound is solved on its own side of 1/2, so a small
