@@ -34,6 +34,7 @@ namespace ErrorBudget.Core.Integrity.Araim;
 /// satellite's mode: both are kept (the PL terms add up to the merged prior; N counts both);
 /// (5) no exposure-time multipliers, fault consolidation or re-allocation of the integrity budget;
 /// (6) exclusion is simplified, see <see cref="Test"/>.</para>
+/// <para>Not thread-safe: one solver per worker (it keeps the last evaluation for <see cref="Test"/>).</para>
 /// </remarks>
 internal sealed partial class AraimSolver
 {

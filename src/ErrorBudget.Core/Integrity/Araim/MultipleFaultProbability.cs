@@ -4,7 +4,8 @@ namespace ErrorBudget.Core.Integrity.Araim;
 /// Running probability that two or more of a set of independent fault events occur, fed one event
 /// prior at a time. Keeps P(none), P(exactly one) and P(two or more) by the recursion
 /// P₂′ = P₂ + P₁·p, P₁′ = P₁·(1 − p) + P₀·p, P₀′ = P₀·(1 − p) (derived), which adds only non-negative
-/// terms to P₂ and so avoids the cancellation of 1 − P₀ − P₁ for small priors. A value type: no allocation.
+/// terms to P₂ and so avoids the cancellation of 1 − P₀ − P₁ for small priors. A value type: no allocation;
+/// create it with <c>new()</c> (the default value has P(none) = 0).
 /// </summary>
 internal struct MultipleFaultProbability
 {
