@@ -20,6 +20,15 @@ public static class ResultSetLayout
     /// <summary>Satellite clock and orbit range errors by age of data.</summary>
     public const string AgeOfDataFileName = "age_of_data.parquet";
 
+    /// <summary>Per-cell availability and integrity events ([integrity]).</summary>
+    public const string AvailabilityFileName = "availability.parquet";
+
+    /// <summary>Integrity diagram: 2-D histogram of (protection level, error).</summary>
+    public const string IntegrityFileName = "integrity.parquet";
+
+    /// <summary>Overbounding check per shell and elevation bin.</summary>
+    public const string OverboundFileName = "overbound.parquet";
+
     /// <summary>Run summary (service-area figures and provenance).</summary>
     public const string SummaryFileName = "summary.json";
 

@@ -7,6 +7,7 @@ namespace ErrorBudget.Results;
 
 /// <summary>
 /// Writes a result set (cells.parquet, epochs.parquet, relativity.parquet, clocks.parquet, age_of_data.parquet,
+/// availability.parquet, integrity.parquet, overbound.parquet,
 /// summary.json) atomically: everything goes
 /// into a fresh temporary sibling folder, which is then renamed into place. A failure at any point
 /// leaves the previous state: no temporary folder, no half result set, the old folder untouched.
@@ -65,6 +66,14 @@ public sealed class ResultSetWriter
 
         var ages = AgeOfDataTable.Definition;
         await ParquetTableWriter.WriteAsync(ages, result.AgeOfData, Path.Combine(folder, ages.FileName), Metadata(result, ages.Name), rowsPerGroup, ct);
+
+        // Integrity (issue 5): empty tables without [integrity], so every result set has the same files.
+        var availability = AvailabilityTable.Definition;
+        await ParquetTableWriter.WriteAsync(availability, result.Integrity?.Cells ?? [], Path.Combine(folder, availability.FileName), Metadata(result, availability.Name), rowsPerGroup, ct);
+        var integrity = IntegrityTable.Definition;
+        await ParquetTableWriter.WriteAsync(integrity, result.Integrity?.Diagram ?? [], Path.Combine(folder, integrity.FileName), Metadata(result, integrity.Name), rowsPerGroup, ct);
+        var overbound = OverboundTable.Definition;
+        await ParquetTableWriter.WriteAsync(overbound, result.Integrity?.Overbound ?? [], Path.Combine(folder, overbound.FileName), Metadata(result, overbound.Name), rowsPerGroup, ct);
 
         ct.ThrowIfCancellationRequested();
         await using var summary = new FileStream(Path.Combine(folder, ResultSetLayout.SummaryFileName), FileMode.CreateNew, FileAccess.Write, FileShare.None);

@@ -30,10 +30,10 @@ internal sealed class FaultInjector
         _seed = seed;
         _shellOf = [.. shells.SelectMany((shell, index) => Enumerable.Repeat(index, shell.Satellites))];
         double windowHours = spec.DurationSeconds / SecondsPerHour;
-        _onsetProbability[KindClockStep] = -Math.ExpM1(-spec.ClockStepRatePerHour * windowHours);
-        _onsetProbability[KindClockRamp] = -Math.ExpM1(-spec.ClockRampRatePerHour * windowHours);
-        _onsetProbability[KindOrbit] = -Math.ExpM1(-spec.OrbitRatePerHour * windowHours);
-        _onsetProbability[KindConstellation] = -Math.ExpM1(-spec.ConstellationRatePerHour * windowHours);
+        _onsetProbability[KindClockStep] = -double.ExpM1(-spec.ClockStepRatePerHour * windowHours);
+        _onsetProbability[KindClockRamp] = -double.ExpM1(-spec.ClockRampRatePerHour * windowHours);
+        _onsetProbability[KindOrbit] = -double.ExpM1(-spec.OrbitRatePerHour * windowHours);
+        _onsetProbability[KindConstellation] = -double.ExpM1(-spec.ConstellationRatePerHour * windowHours);
     }
 
     /// <summary>

@@ -27,4 +27,7 @@ public enum RandomPurpose : ulong
 
     /// <summary>Reserved for a future model.</summary>
     Spare = 7,
+
+    /// <summary>Per-satellite user-level draws of the overbounding check (integrity).</summary>
+    IntegrityCheck = 8,
 }

@@ -29,4 +29,7 @@ internal sealed class CellAccumulator(double relativeAccuracy)
 
     /// <summary>Position-error samples (available epochs x trials).</summary>
     public long Samples;
+
+    /// <summary>[integrity] accumulators; null without the table.</summary>
+    public IntegrityCellAccumulator? Integrity { get; init; }
 }

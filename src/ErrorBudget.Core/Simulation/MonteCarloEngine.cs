@@ -28,13 +28,15 @@ public static class MonteCarloEngine
         var clock = Stopwatch.StartNew();
         var setup = new SimulationSetup(scenario, options);
         double accuracy = SimulationSetup.SketchAccuracy;
+        var integrity = scenario.Integrity is null ? null : new IntegrityKernel(setup);
         var cells = new CellAccumulator[setup.Grid.Count];
         for (int i = 0; i < cells.Length; i++)
         {
-            cells[i] = new CellAccumulator(accuracy);
+            cells[i] = new CellAccumulator(accuracy) { Integrity = integrity is null ? null : new IntegrityCellAccumulator(accuracy) };
         }
 
-        var kernel = new TileKernel(setup, cells, options.UseSimd);
+        var kernel = new TileKernel(setup, cells, options.UseSimd, integrity);
+        int batches = Math.Clamp(scenario.Batches, 1, setup.Trials);
         var sampler = new SatelliteErrorSampler(scenario, setup.Seed);
         var epochs = new EpochResult[setup.Epochs];
         var scratchPool = new ConcurrentBag<TileScratch>();
@@ -68,14 +70,32 @@ public static class MonteCarloEngine
         var run = new ActionBlock<TileJob>(
             job =>
             {
-                TileScratch scratch = scratchPool.TryTake(out var s) ? s : new TileScratch(scenario.TotalSatellites, setup.LaneCapacity, accuracy);
+                TileScratch scratch = scratchPool.TryTake(out var s) ? s : new TileScratch(scenario.TotalSatellites, setup.LaneCapacity, accuracy, batches)
+                {
+                    Integrity = integrity is null ? null : new IntegrityScratch(setup.LaneCapacity, integrity.OverboundGroups),
+                };
                 foreach (EpochWork work in job.Batch)
                 {
                     kernel.Process(work, job.Tile, scratch);
                     EpochAccumulator acc = work.Accumulator;
                     int epoch = work.Epoch;
+                    for (int b = 0; b < scratch.Batches && scratch.Batches > 1; b++)
+                    {
+                        scratch.HpeRun[b].Merge(scratch.HpeBatches[b]);
+                        scratch.VpeRun[b].Merge(scratch.VpeBatches[b]);
+                    }
+
                     lock (acc.Gate)
                     {
+                        if (scratch.Batches > 1)
+                        {
+                            for (int b = 0; b < scratch.Batches; b++)
+                            {
+                                acc.Hpe.Merge(scratch.HpeBatches[b]);
+                                acc.Vpe.Merge(scratch.VpeBatches[b]);
+                            }
+                        }
+
                         acc.Hpe.Merge(scratch.Hpe);
                         acc.Vpe.Merge(scratch.Vpe);
                         acc.Pdop.Merge(scratch.Pdop);
@@ -140,8 +160,11 @@ public static class MonteCarloEngine
             HashOf(scenario.SourceText), setup.Seed, setup.Trials, options.ToolVersion, threads, started, clock.Elapsed.TotalSeconds);
         // Relativity figures (issue 4): deterministic, computed once from the scenario.
         var relativity = Relativity.RelativityAnalysis.Build(scenario, ct);
+        var scratches = scratchPool.ToArray();
         return new RunResult(scenario, metadata, cellResults, epochs, global)
         {
+            Integrity = integrity is null ? null : IntegrityAssembly.Build(setup, integrity, cells, scratches),
+            Intervals = batches < 2 ? null : BatchIntervalAssembly.Build(scratches, batches),
             Relativity = relativity,
             // Clock grades (issue 3): the grade's model vs simulated ADEV, and the sampler's age-of-data statistics.
             Clocks = MeasureClockGrade(scenario, setup),

@@ -20,6 +20,12 @@ public sealed record RunResult(
 
     /// <summary>Clock and orbit range errors by age of data (empty when the run drew no satellite errors).</summary>
     public IReadOnlyList<AgeOfDataRow> AgeOfData { get; init; } = [];
+
+    /// <summary>[integrity] (issue 5): protection levels, availability, integrity events, diagram, overbounding; null without the table.</summary>
+    public IntegrityReport? Integrity { get; init; }
+
+    /// <summary>Batch-means confidence intervals of the global percentiles; null with fewer than 2 batches.</summary>
+    public BatchIntervals? Intervals { get; init; }
 }
 
 /// <summary>Provenance of a run, written into every table's key-value metadata and the summary.</summary>

@@ -32,15 +32,23 @@ internal sealed class TileKernel
     private readonly int _satellites;
     private readonly bool _simd;
     private readonly Relativity.RelativisticUserBias _userBias;
+    private readonly IntegrityKernel? _integrity;
+    private readonly int _trials;
 
-    public TileKernel(SimulationSetup setup, CellAccumulator[] cells, bool useSimd)
+    public TileKernel(SimulationSetup setup, CellAccumulator[] cells, bool useSimd, IntegrityKernel? integrity = null)
     {
+        _integrity = integrity;
+        _trials = setup.Trials;
         _grid = setup.Grid;
         _cells = cells;
         _weights = setup.Weights;
         _truthUser = new ElevationVarianceTable(UserErrorModel.From(setup.Scenario.User));
         _assumedUser = new ElevationVarianceTable(UserErrorModel.From(setup.Scenario.Assumed.User));
-        _assumedUreVariance = setup.Scenario.Assumed.UreSigmaMeters * setup.Scenario.Assumed.UreSigmaMeters;
+        // The receiver's satellite-level sigma: the assumed URE, or sigma_URA for ARAIM (its weights are C_int^-1).
+        double ure = integrity?.Spec.Method == Scenarios.ProtectionLevelMethod.Araim
+            ? integrity.Spec.Araim.UraSigmaMeters
+            : setup.Scenario.Assumed.UreSigmaMeters;
+        _assumedUreVariance = ure * ure;
         _sinMask = Math.Sin(setup.Scenario.Grid.MaskDeg * Math.PI / 180.0);
         _prefilterSinMaskSquared = _sinMask * _sinMask * (1.0 - 1e-12);
         _seed = setup.Seed;
@@ -53,6 +61,11 @@ internal sealed class TileKernel
     public void Process(EpochWork work, Tile tile, TileScratch scratch)
     {
         scratch.ResetEpochShare();
+        if (scratch.Batches > 1)
+        {
+            scratch.PrepareSegments(work.FirstTrial, work.BlockTrials, _trials);
+        }
+
         lock (tile.Gate)
         {
             for (int c = tile.First; c < tile.First + tile.Count; c++)
@@ -94,6 +107,17 @@ internal sealed class TileKernel
             return;
         }
 
+        double hpl = double.NaN, vpl = double.NaN;
+        bool available = false;
+        if (_integrity is not null)
+        {
+            (hpl, vpl, available) = _integrity.WeightedLevels(s);
+            if (work.IsFirstBlock)
+            {
+                IntegrityKernel.CountEpoch(acc.Integrity!, hpl, vpl, available);
+            }
+        }
+
         if (work.IsFirstBlock)
         {
             acc.Pdop.Add(dop.Pdop);
@@ -121,6 +145,11 @@ internal sealed class TileKernel
 
         acc.Samples += trials;
         s.Samples += trials;
+        if (_integrity is not null)
+        {
+            _integrity.Tally(acc.Integrity!, s.Integrity!, trials, hpl, vpl, available, []);
+            _integrity.SampleOverbound(m, work, cell.Index, s, s.Integrity!, s.IntegrityVariance);
+        }
     }
 
     /// <summary>
@@ -183,7 +212,9 @@ internal sealed class TileKernel
         for (int i = 0; i < m; i++)
         {
             double sinEl = s.SinElevation[i];
-            s.Weights[i] = 1.0 / (_assumedUreVariance + _assumedUser.At(sinEl));
+            double assumed = _assumedUreVariance + _assumedUser.At(sinEl);
+            s.IntegrityVariance[i] = assumed;
+            s.Weights[i] = 1.0 / assumed;
             s.TruthVariance[i] = _truthUser.At(sinEl);
         }
 

@@ -7,14 +7,29 @@ namespace ErrorBudget.Core.Simulation;
 internal sealed class TileScratch
 {
     /// <param name="laneCapacity">Trials per block rounded up to whole vectors.</param>
-    public TileScratch(int satellites, int laneCapacity, double relativeAccuracy)
+    public TileScratch(int satellites, int laneCapacity, double relativeAccuracy, int batches = 1)
     {
+        Batches = batches;
+        HpeBatches = new DDSketch[batches];
+        VpeBatches = new DDSketch[batches];
+        HpeRun = new DDSketch[batches];
+        VpeRun = new DDSketch[batches];
+        for (int b = 0; b < batches; b++)
+        {
+            HpeBatches[b] = new DDSketch(relativeAccuracy);
+            VpeBatches[b] = new DDSketch(relativeAccuracy);
+            HpeRun[b] = new DDSketch(relativeAccuracy);
+            VpeRun[b] = new DDSketch(relativeAccuracy);
+        }
+
+        SegmentEnds = new int[batches];
         Visible = new int[satellites];
         LineOfSight = new Vec3[satellites];
         LineOfSightEnu = new Vec3[satellites];
         SinElevation = new double[satellites];
         Weights = new double[satellites];
         TruthVariance = new double[satellites];
+        IntegrityVariance = new double[satellites];
         Projection = new double[4 * satellites];
         Coefficients = new double[8 * satellites];
         Normals = new double[3 * laneCapacity];
@@ -32,6 +47,9 @@ internal sealed class TileScratch
     public double[] SinElevation { get; }
     public double[] Weights { get; }
     public double[] TruthVariance { get; }
+
+    /// <summary>The receiver's assumed range-error variance per visible satellite (the inverse weights), m^2.</summary>
+    public double[] IntegrityVariance { get; }
     public double[] Projection { get; }
     public double[] Covariance4 { get; } = new double[16];
     public double[] Covariance3 { get; } = new double[9];
@@ -58,6 +76,44 @@ internal sealed class TileScratch
     public DDSketch Hpe { get; }
     public DDSketch Vpe { get; }
     public DDSketch Pdop { get; }
+    /// <summary>Trial batches of the batch-means intervals (1: none; the epoch share is then <see cref="Hpe"/> alone).</summary>
+    public int Batches { get; }
+
+    /// <summary>With batches: this job's epoch share split by trial batch (merged into the epoch and into <see cref="HpeRun"/>).</summary>
+    public DDSketch[] HpeBatches { get; }
+    public DDSketch[] VpeBatches { get; }
+
+    /// <summary>This worker's run-long area-weighted sketches per trial batch, merged once at the end.</summary>
+    public DDSketch[] HpeRun { get; }
+    public DDSketch[] VpeRun { get; }
+
+    /// <summary>The current block's batch segments: trials [ends[g-1], ends[g]) of the block belong to batch FirstSegmentBatch + g.</summary>
+    public int[] SegmentEnds { get; }
+    public int SegmentCount;
+    public int FirstSegmentBatch;
+
+    /// <summary>Integrity buffers and shares; null without [integrity].</summary>
+    public IntegrityScratch? Integrity { get; set; }
+
+    /// <summary>
+    /// Splits a block's trials [firstTrial, firstTrial + count) into the batches b = floor(t B / T):
+    /// the same split for every user of the block.
+    /// </summary>
+    public void PrepareSegments(int firstTrial, int count, int totalTrials)
+    {
+        int last = firstTrial + count - 1;
+        int firstBatch = (int)((long)firstTrial * Batches / totalTrials);
+        int lastBatch = (int)((long)last * Batches / totalTrials);
+        FirstSegmentBatch = firstBatch;
+        SegmentCount = lastBatch - firstBatch + 1;
+        for (int g = 0; g < SegmentCount; g++)
+        {
+            int b = firstBatch + g + 1; // first trial of the next batch: ceil(b T / B)
+            long nextStart = ((long)b * totalTrials + Batches - 1) / Batches;
+            SegmentEnds[g] = (int)(Math.Min(nextStart, firstTrial + count) - firstTrial);
+        }
+    }
+
     public long WeightSum;
     public long UnavailableWeight;
     public long SatsInViewWeighted;
@@ -67,6 +123,12 @@ internal sealed class TileScratch
     {
         Hpe.Clear();
         Vpe.Clear();
+        for (int b = 0; b < Batches; b++)
+        {
+            HpeBatches[b].Clear();
+            VpeBatches[b].Clear();
+        }
+
         Pdop.Clear();
         WeightSum = 0;
         UnavailableWeight = 0;

@@ -38,6 +38,7 @@ internal static class TrialSampler
         var e0 = Vector256.Create(s.CommonOffset[0]);
         var n0 = Vector256.Create(s.CommonOffset[1]);
         var u0 = Vector256.Create(s.CommonOffset[2]);
+        IntegrityScratch? values = s.Integrity;
 
         // Two vectors (eight trials) per step: the satellite loop's coefficient broadcasts are shared
         // and two independent accumulation chains hide the multiply-add latency. Blocks are padded to
@@ -74,8 +75,8 @@ internal static class TrialSampler
                 ub = Vector256.FusedMultiplyAdd(rangeB, su, ub);
             }
 
-            Finish(ea, na, ua, ref z, j, stride, l0, l3, l4, l6, l7, l8, inverseLnGamma, minIndexable, keysH, keysV);
-            Finish(eb, nb, ub, ref z, j + 4, stride, l0, l3, l4, l6, l7, l8, inverseLnGamma, minIndexable, keysH, keysV);
+            Finish(ea, na, ua, ref z, j, stride, l0, l3, l4, l6, l7, l8, inverseLnGamma, minIndexable, keysH, keysV, values);
+            Finish(eb, nb, ub, ref z, j + 4, stride, l0, l3, l4, l6, l7, l8, inverseLnGamma, minIndexable, keysH, keysV, values);
         }
 
         AddAll(acc, weight, s, trials);
@@ -86,7 +87,7 @@ internal static class TrialSampler
     private static void Finish(
         Vector256<double> e, Vector256<double> n, Vector256<double> u, ref double z, int j, int stride,
         Vector256<double> l0, Vector256<double> l3, Vector256<double> l4, Vector256<double> l6, Vector256<double> l7, Vector256<double> l8,
-        Vector256<double> inverseLnGamma, Vector256<double> minIndexable, Span<int> keysH, Span<int> keysV)
+        Vector256<double> inverseLnGamma, Vector256<double> minIndexable, Span<int> keysH, Span<int> keysV, IntegrityScratch? values)
     {
         var z0 = Vector256.LoadUnsafe(ref z, (nuint)j);
         var z1 = Vector256.LoadUnsafe(ref z, (nuint)(stride + j));
@@ -98,15 +99,28 @@ internal static class TrialSampler
         var vpe = Vector256.Abs(u);
         VectorKeys(hpe, inverseLnGamma, minIndexable, keysH.Slice(j, Vector256<double>.Count));
         VectorKeys(vpe, inverseLnGamma, minIndexable, keysV.Slice(j, Vector256<double>.Count));
+        if (values is not null)
+        {
+            hpe.StoreUnsafe(ref MemoryMarshal.GetArrayDataReference(values.HpeValues), (nuint)j);
+            vpe.StoreUnsafe(ref MemoryMarshal.GetArrayDataReference(values.VpeValues), (nuint)j);
+        }
     }
 
     /// <summary>The block's keys into the cell's sketches (weight 1) and the epoch share (area weight); padded lanes are left out.</summary>
-    private static void AddAll(CellAccumulator acc, long weight, TileScratch s, int trials)
+    internal static void AddAll(CellAccumulator acc, long weight, TileScratch s, int trials)
     {
         ReadOnlySpan<int> h = s.KeysH.AsSpan(0, trials);
         ReadOnlySpan<int> v = s.KeysV.AsSpan(0, trials);
-        DDSketch.AddKeysToBoth(h, acc.Hpe, 1, s.Hpe, weight);
-        DDSketch.AddKeysToBoth(v, acc.Vpe, 1, s.Vpe, weight);
+        if (s.Batches == 1)
+        {
+            DDSketch.AddKeysToBoth(h, acc.Hpe, 1, s.Hpe, weight);
+            DDSketch.AddKeysToBoth(v, acc.Vpe, 1, s.Vpe, weight);
+            return;
+        }
+
+        ReadOnlySpan<int> ends = s.SegmentEnds.AsSpan(0, s.SegmentCount);
+        DDSketch.AddKeysSegmented(h, acc.Hpe, 1, ends, s.HpeBatches.AsSpan(s.FirstSegmentBatch, s.SegmentCount), weight);
+        DDSketch.AddKeysSegmented(v, acc.Vpe, 1, ends, s.VpeBatches.AsSpan(s.FirstSegmentBatch, s.SegmentCount), weight);
     }
 
     /// <summary>Sketch keys ceil(ln x / ln gamma) of four values, the zero key at or below MinIndexable.</summary>
@@ -152,8 +166,15 @@ internal static class TrialSampler
 
             // The same operations in the same order as the vector twin: identical values, only the
             // logarithm of the sketch key may differ in the last bits (FastMath256 vs Math.Log).
-            s.KeysH[j] = mapping.KeyOf(Math.Sqrt(Math.FusedMultiplyAdd(e, e, n * n)));
-            s.KeysV[j] = mapping.KeyOf(Math.Abs(u));
+            double hpe = Math.Sqrt(Math.FusedMultiplyAdd(e, e, n * n));
+            double vpe = Math.Abs(u);
+            s.KeysH[j] = mapping.KeyOf(hpe);
+            s.KeysV[j] = mapping.KeyOf(vpe);
+            if (s.Integrity is { } values)
+            {
+                values.HpeValues[j] = hpe;
+                values.VpeValues[j] = vpe;
+            }
         }
 
         AddAll(acc, weight, s, trials);

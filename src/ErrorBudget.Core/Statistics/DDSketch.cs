@@ -118,6 +118,62 @@ public sealed partial class DDSketch
     }
 
     /// <summary>Lowest and highest non-zero key of a span (empty: lo &gt; hi) and how many zero keys it holds.</summary>
+    /// <summary>
+    /// Adds every key to <paramref name="first"/> with <paramref name="firstWeight"/>, and the keys of
+    /// segment g (keys [ends[g-1], ends[g]), ends[-1] = 0) to <paramref name="seconds"/>[g] with
+    /// <paramref name="secondWeight"/>: one scan of the keys and one range reservation per sketch,
+    /// then plain increments. Used to split an epoch's samples into trial batches at no extra pass.
+    /// </summary>
+    public static void AddKeysSegmented(
+        ReadOnlySpan<int> keys, DDSketch first, long firstWeight, ReadOnlySpan<int> ends, ReadOnlySpan<DDSketch> seconds, long secondWeight)
+    {
+        ArgumentNullException.ThrowIfNull(first);
+        if (ends.Length != seconds.Length || (ends.Length > 0 && ends[^1] != keys.Length))
+        {
+            throw new ArgumentException("Need one sketch per segment and segments that end at the last key.", nameof(ends));
+        }
+
+        ScanKeys(keys, out int lo, out int hi, out long zeros);
+        if (lo <= hi)
+        {
+            first.ReserveKeys(lo, hi);
+        }
+
+        ref long a0 = ref MemoryMarshal.GetArrayDataReference(first.counts);
+        int aShift = first.offset;
+        int start = 0;
+        for (int g = 0; g < seconds.Length; g++)
+        {
+            DDSketch second = seconds[g];
+            ReadOnlySpan<int> segment = keys[start..ends[g]];
+            start = ends[g];
+            if (lo <= hi)
+            {
+                second.ReserveKeys(lo, hi);
+            }
+
+            ref long b0 = ref MemoryMarshal.GetArrayDataReference(second.counts);
+            int bShift = second.offset;
+            long segmentZeros = 0;
+            foreach (int key in segment)
+            {
+                if (key != ZeroKey)
+                {
+                    Unsafe.Add(ref a0, key - aShift) += firstWeight;
+                    Unsafe.Add(ref b0, key - bShift) += secondWeight;
+                }
+                else
+                {
+                    segmentZeros++;
+                }
+            }
+
+            second.AddTotals(segment.Length, segmentZeros, secondWeight);
+        }
+
+        first.AddTotals(keys.Length, zeros, firstWeight);
+    }
+
     private static void ScanKeys(ReadOnlySpan<int> keys, out int lo, out int hi, out long zeros)
     {
         lo = int.MaxValue;

@@ -20,6 +20,9 @@ internal static class SchemaDocuments
         (FileName(RelativityTable.Definition.Name), TableSchemaDocument.Build(RelativityTable.Definition)),
         (FileName(ClocksTable.Definition.Name), TableSchemaDocument.Build(ClocksTable.Definition)),
         (FileName(AgeOfDataTable.Definition.Name), TableSchemaDocument.Build(AgeOfDataTable.Definition)),
+        (FileName(AvailabilityTable.Definition.Name), TableSchemaDocument.Build(AvailabilityTable.Definition)),
+        (FileName(IntegrityTable.Definition.Name), TableSchemaDocument.Build(IntegrityTable.Definition)),
+        (FileName(OverboundTable.Definition.Name), TableSchemaDocument.Build(OverboundTable.Definition)),
         (FileName(SummaryDefinition.Name), SummarySchemaDocument.Build()),
     ];
 

@@ -32,8 +32,13 @@ internal static class TableSchemaDocument
             }
 
             json.WriteEndArray();
+            // A composite key is written "a,b" in the definition.
             json.WriteStartArray("primaryKey");
-            json.WriteStringValue(table.PrimaryKey);
+            foreach (string key in table.PrimaryKey.Split(','))
+            {
+                json.WriteStringValue(key);
+            }
+
             json.WriteEndArray();
             json.WriteEndObject();
         }

@@ -1,0 +1,53 @@
+using ErrorBudget.Core.Integrity;
+using ErrorBudget.Core.Statistics;
+
+namespace ErrorBudget.Core.Simulation;
+
+/// <summary>Turns the workers' per-batch area-weighted sketches into batch-means intervals of the global percentiles.</summary>
+internal static class BatchIntervalAssembly
+{
+    public static BatchIntervals Build(IReadOnlyList<TileScratch> scratches, int batches)
+    {
+        var hpe = new DDSketch[batches];
+        var vpe = new DDSketch[batches];
+        for (int b = 0; b < batches; b++)
+        {
+            hpe[b] = new DDSketch(SimulationSetup.SketchAccuracy);
+            vpe[b] = new DDSketch(SimulationSetup.SketchAccuracy);
+            foreach (var s in scratches)
+            {
+                hpe[b].Merge(s.HpeRun[b]);
+                vpe[b].Merge(s.VpeRun[b]);
+            }
+        }
+
+        return new BatchIntervals(batches, Intervals(hpe), Intervals(vpe));
+    }
+
+    private static PercentileInterval[] Intervals(DDSketch[] perBatch)
+    {
+        var result = new PercentileInterval[PercentileSet.Levels.Length];
+        Span<double> estimates = stackalloc double[perBatch.Length];
+        for (int k = 0; k < result.Length; k++)
+        {
+            double level = PercentileSet.Levels[k];
+            bool complete = true;
+            for (int b = 0; b < perBatch.Length; b++)
+            {
+                estimates[b] = perBatch[b].IsEmpty ? double.NaN : perBatch[b].Quantile(level);
+                complete &= double.IsFinite(estimates[b]);
+            }
+
+            if (!complete)
+            {
+                result[k] = new PercentileInterval(level, double.NaN, double.NaN, double.NaN);
+                continue;
+            }
+
+            BatchMeansEstimate e = BatchMeansInterval.Compute(estimates, BatchIntervals.Confidence);
+            result[k] = new PercentileInterval(level, e.Mean, e.Lower, e.Upper);
+        }
+
+        return result;
+    }
+}
