@@ -43,4 +43,7 @@ internal sealed class EpochWork(int satellites, int laneCapacity)
 
     /// <summary>See <see cref="Errors.SatelliteErrorSampler"/> for the layout.</summary>
     public double[] SatelliteErrors { get; } = new double[satellites * laneCapacity * Errors.SatelliteErrorSampler.Components];
+
+    /// <summary>With [faults]: true at [satellite * laneCapacity + trial] when an injected fault is active.</summary>
+    public bool[] Faulted { get; } = new bool[satellites * laneCapacity];
 }

@@ -28,6 +28,51 @@ internal sealed class IntegrityKernel
 
     public IntegritySpec Spec => _spec;
 
+    /// <summary>A worker's integrity buffers (with its own ARAIM solver when the method is ARAIM).</summary>
+    public IntegrityScratch CreateScratch(SimulationSetup setup)
+    {
+        int satellites = setup.Scenario.TotalSatellites;
+        Integrity.Araim.AraimSolver? solver = _spec.Method == ProtectionLevelMethod.Araim
+            ? new Integrity.Araim.AraimSolver(Math.Max(4, satellites), AraimParameters)
+            : null;
+        return new IntegrityScratch(setup.LaneCapacity, OverboundGroups, satellites, solver);
+    }
+
+    /// <summary>The ARAIM user parameters of the scenario (baseline allocations, the scenario's priors).</summary>
+    public Integrity.Araim.AraimParameters AraimParameters => new()
+    {
+        PSat = _spec.Araim.SatelliteFaultPrior,
+        PConst = _spec.Araim.ConstellationFaultPrior,
+        NominalBiasIntegrityMeters = _spec.Araim.NominalBiasMeters,
+    };
+
+    /// <summary>
+    /// ARAIM protection levels of the visible set and availability (PL &lt;= AL; for lpv-200 also the EMT
+    /// and sigma_acc criteria). False when the monitor cannot be evaluated (then: unavailable).
+    /// </summary>
+    public (double Hpl, double Vpl, bool Available) AraimLevels(int m, TileScratch s, IntegrityScratch x)
+    {
+        double uraVariance = _spec.Araim.UraSigmaMeters * _spec.Araim.UraSigmaMeters;
+        double ureVariance = _spec.Araim.UreSigmaMeters * _spec.Araim.UreSigmaMeters;
+        for (int i = 0; i < m; i++)
+        {
+            double local = s.IntegrityVariance[i] - uraVariance; // the assumed user-level variance
+            x.Constellation[i] = _shellOf[s.Visible[i]];
+            x.AccuracyVariance[i] = ureVariance + local;
+            x.NominalBias[i] = _spec.Araim.NominalBiasMeters;
+        }
+
+        if (!x.Araim!.TryEvaluate(s.LineOfSightEnu.AsSpan(0, m), x.Constellation.AsSpan(0, m), s.IntegrityVariance.AsSpan(0, m),
+                x.AccuracyVariance.AsSpan(0, m), x.NominalBias.AsSpan(0, m), out Integrity.Araim.AraimResult r))
+        {
+            return (double.NaN, double.NaN, false);
+        }
+
+        bool available = r.UnmonitoredWithinThreshold && IsAvailable(r.HplMeters, r.VplMeters)
+            && (_spec.Service != "lpv-200" || Integrity.Araim.Lpv200Criteria.IsAvailable(r));
+        return (r.HplMeters, r.VplMeters, available);
+    }
+
     /// <summary>Overbounding groups: shells x elevation bins.</summary>
     public int OverboundGroups { get; }
 
@@ -52,9 +97,15 @@ internal sealed class IntegrityKernel
     /// <summary>Geometry-level bookkeeping, once per epoch (first trial block).</summary>
     public static void CountEpoch(IntegrityCellAccumulator acc, double hpl, double vpl, bool available)
     {
-        acc.SolvedEpochs++;
-        acc.Hpl.Add(hpl);
-        acc.Vpl.Add(vpl);
+        // Infinite or missing levels (ARAIM that cannot monitor the geometry) stay out of the PL
+        // percentiles; such an epoch is unavailable.
+        if (double.IsFinite(hpl) && double.IsFinite(vpl))
+        {
+            acc.SolvedEpochs++;
+            acc.Hpl.Add(hpl);
+            acc.Vpl.Add(vpl);
+        }
+
         if (available)
         {
             acc.AvailableEpochs++;

@@ -9,8 +9,15 @@ namespace ErrorBudget.Core.Simulation;
 /// </summary>
 internal sealed class IntegrityScratch
 {
-    public IntegrityScratch(int laneCapacity, int overboundGroups)
+    public IntegrityScratch(int laneCapacity, int overboundGroups, int satellites = 0, Integrity.Araim.AraimSolver? araim = null)
     {
+        Araim = araim;
+        Flagged = new bool[laneCapacity];
+        SatelliteNormals = araim is null ? [] : new double[satellites * laneCapacity];
+        Ranges = new double[satellites];
+        Constellation = new int[satellites];
+        AccuracyVariance = new double[satellites];
+        NominalBias = new double[satellites];
         HpeValues = new double[laneCapacity];
         VpeValues = new double[laneCapacity];
         Bins = new int[laneCapacity];
@@ -29,6 +36,17 @@ internal sealed class IntegrityScratch
 
     /// <summary>Diagram error bins of the block's trials.</summary>
     public int[] Bins { get; }
+
+    /// <summary>ARAIM: this worker's solver, the per-satellite user-level normals [i * lanes + trial], one trial's ranges.</summary>
+    public Integrity.Araim.AraimSolver? Araim { get; }
+    public double[] SatelliteNormals { get; }
+    public double[] Ranges { get; }
+    public int[] Constellation { get; }
+    public double[] AccuracyVariance { get; }
+    public double[] NominalBias { get; }
+
+    /// <summary>Trials the receiver's monitor flagged without a successful exclusion (no service).</summary>
+    public bool[] Flagged { get; }
 
     public IntegrityDiagram Horizontal { get; }
     public IntegrityDiagram Vertical { get; }

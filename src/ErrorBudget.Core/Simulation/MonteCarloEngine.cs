@@ -72,7 +72,7 @@ public static class MonteCarloEngine
             {
                 TileScratch scratch = scratchPool.TryTake(out var s) ? s : new TileScratch(scenario.TotalSatellites, setup.LaneCapacity, accuracy, batches)
                 {
-                    Integrity = integrity is null ? null : new IntegrityScratch(setup.LaneCapacity, integrity.OverboundGroups),
+                    Integrity = integrity?.CreateScratch(setup),
                 };
                 foreach (EpochWork work in job.Batch)
                 {
@@ -193,7 +193,7 @@ public static class MonteCarloEngine
         w.IsFirstBlock = block == 0;
         setup.Constellation.Propagate(t, setup.StartRotationAngleRad, w.States);
         w.FillPositions();
-        sampler.Sample(epoch, t, w.RotationAngleRad, w.States, w.FirstTrial, w.BlockTrials, setup.LaneCapacity, w.SatelliteErrors);
+        sampler.Sample(epoch, t, w.RotationAngleRad, w.States, w.FirstTrial, w.BlockTrials, setup.LaneCapacity, w.SatelliteErrors, w.Faulted);
     }
 
     private static EpochResult FinishEpoch(SimulationSetup setup, int epoch, EpochAccumulator acc)

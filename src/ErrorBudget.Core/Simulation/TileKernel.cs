@@ -33,11 +33,13 @@ internal sealed class TileKernel
     private readonly bool _simd;
     private readonly Relativity.RelativisticUserBias _userBias;
     private readonly IntegrityKernel? _integrity;
+    private readonly bool _araim;
     private readonly int _trials;
 
     public TileKernel(SimulationSetup setup, CellAccumulator[] cells, bool useSimd, IntegrityKernel? integrity = null)
     {
         _integrity = integrity;
+        _araim = integrity?.Spec.Method == Scenarios.ProtectionLevelMethod.Araim;
         _trials = setup.Trials;
         _grid = setup.Grid;
         _cells = cells;
@@ -111,7 +113,9 @@ internal sealed class TileKernel
         bool available = false;
         if (_integrity is not null)
         {
-            (hpl, vpl, available) = _integrity.WeightedLevels(s);
+            (hpl, vpl, available) = _araim
+                ? _integrity.AraimLevels(m, s, s.Integrity!)
+                : _integrity.WeightedLevels(s);
             if (work.IsFirstBlock)
             {
                 IntegrityKernel.CountEpoch(acc.Integrity!, hpl, vpl, available);
@@ -133,13 +137,18 @@ internal sealed class TileKernel
 
         int trials = work.BlockTrials;
         int lanes = (trials + SimulationSetup.NormalBatch - 1) / SimulationSetup.NormalBatch * SimulationSetup.NormalBatch;
-        FillUserNormals(_seed, work.Epoch, cell.Index, work.FirstTrial, _simd ? lanes : trials, s);
-        if (_simd && TrialSampler.VectorPathAvailable)
+        if (_araim)
         {
+            AraimTrialSampler.Sample(m, work, cell.Index, _seed, acc, weight, s);
+        }
+        else if (_simd && TrialSampler.VectorPathAvailable)
+        {
+            FillUserNormals(_seed, work.Epoch, cell.Index, work.FirstTrial, lanes, s);
             TrialSampler.SampleVector(m, trials, work.SatelliteErrors, acc, weight, s);
         }
         else
         {
+            FillUserNormals(_seed, work.Epoch, cell.Index, work.FirstTrial, trials, s);
             TrialSampler.SampleScalar(m, trials, work.SatelliteErrors, acc, weight, s);
         }
 
@@ -147,7 +156,7 @@ internal sealed class TileKernel
         s.Samples += trials;
         if (_integrity is not null)
         {
-            _integrity.Tally(acc.Integrity!, s.Integrity!, trials, hpl, vpl, available, []);
+            _integrity.Tally(acc.Integrity!, s.Integrity!, trials, hpl, vpl, available, _araim ? s.Integrity!.Flagged.AsSpan(0, trials) : []);
             _integrity.SampleOverbound(m, work, cell.Index, s, s.Integrity!, s.IntegrityVariance);
         }
     }

@@ -37,8 +37,29 @@ internal static class SummaryDefinition
         Worst("worst_cell_hpe", "The cell with the largest 95th percentile of HPE.", r => r.Global.WorstHpe),
         Worst("worst_cell_vpe", "The cell with the largest 95th percentile of VPE.", r => r.Global.WorstVpe),
         RelativityPosition(),
+        new SummaryInteger("batches", "Independent trial batches behind the confidence intervals (1: none).", "1", r => r.Intervals?.Batches ?? 1, 1),
+        Intervals("hpe_ci", "95 % batch-means confidence intervals of the global HPE percentiles; nulls with fewer than 2 batches.", r => r.Intervals?.Hpe),
+        Intervals("vpe_ci", "95 % batch-means confidence intervals of the global VPE percentiles; nulls with fewer than 2 batches.", r => r.Intervals?.Vpe),
+        IntegritySummary.Object(),
         new SummaryString("caution", "How far these results may be relied on.", null, _ => ResultCaution.Text),
     ];
+
+    private static SummaryObject Intervals(string name, string description, Func<RunResult, IReadOnlyList<PercentileInterval>?> get)
+    {
+        SummaryNumber Bound(string field, string text, int level, Func<PercentileInterval, double> pick) =>
+            new(field, text, "m", true, r => get(r) is { } list ? pick(list[level]) : double.NaN, Minimum: 0);
+        return new SummaryObject(name, description,
+        [
+            Bound("p50_lower_m", "Lower bound of the median.", 0, i => i.Lower),
+            Bound("p50_upper_m", "Upper bound of the median.", 0, i => i.Upper),
+            Bound("p95_lower_m", "Lower bound of the 95th percentile.", 1, i => i.Lower),
+            Bound("p95_upper_m", "Upper bound of the 95th percentile.", 1, i => i.Upper),
+            Bound("p99_lower_m", "Lower bound of the 99th percentile.", 2, i => i.Lower),
+            Bound("p99_upper_m", "Upper bound of the 99th percentile.", 2, i => i.Upper),
+            Bound("p999_lower_m", "Lower bound of the 99.9th percentile (wide with few trials per batch).", 3, i => i.Lower),
+            Bound("p999_upper_m", "Upper bound of the 99.9th percentile.", 3, i => i.Upper),
+        ]);
+    }
 
     private static SummaryObject RelativityPosition() =>
         new("relativity_position",
