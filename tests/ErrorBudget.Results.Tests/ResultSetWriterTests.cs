@@ -8,11 +8,12 @@ public class ResultSetWriterTests
     private static readonly string[] ResultFiles =
     [
         ResultSetLayout.CellsFileName, ResultSetLayout.EpochsFileName, ResultSetLayout.RelativityFileName,
-        ResultSetLayout.ClocksFileName, ResultSetLayout.AgeOfDataFileName, ResultSetLayout.SummaryFileName,
+        ResultSetLayout.ClocksFileName, ResultSetLayout.AgeOfDataFileName, ResultSetLayout.AvailabilityFileName,
+        ResultSetLayout.IntegrityFileName, ResultSetLayout.OverboundFileName, ResultSetLayout.SummaryFileName,
     ];
 
     [Fact]
-    public async Task New_folder_holds_exactly_the_six_result_files_and_no_work_folder_is_left()
+    public async Task New_folder_holds_exactly_the_nine_result_files_and_no_work_folder_is_left()
     {
         using var temp = new TempFolder();
 

@@ -19,11 +19,11 @@ public class ScenarioStructureTests
     [Fact]
     public void An_unknown_table_is_named_with_its_line_and_the_allowed_tables()
     {
-        var text = ScenarioText.Valid + "[faults]\nrate_per_h = 1\n";
+        var text = ScenarioText.Valid + "[failures]\nrate_per_h = 1\n";
 
-        var error = ScenarioText.SingleError(text, "faults", ScenarioText.LineOf(text, "[faults]"));
+        var error = ScenarioText.SingleError(text, "failures", ScenarioText.LineOf(text, "[failures]"));
 
-        Assert.Equal("[run], [[shell]], [grid], [clock], [orbit], [user], [assumed], [relativity]", error.Allowed);
+        Assert.Equal("[run], [[shell]], [grid], [clock], [orbit], [user], [assumed], [relativity], [integrity], [faults]", error.Allowed);
     }
 
     [Fact]

@@ -114,6 +114,58 @@ public class SummaryJsonTests
             "vpe_max_m": null,
             "receiver_clock_rms_m": null
           },
+          "batches": 1,
+          "hpe_ci": {
+            "p50_lower_m": null,
+            "p50_upper_m": null,
+            "p95_lower_m": null,
+            "p95_upper_m": null,
+            "p99_lower_m": null,
+            "p99_upper_m": null,
+            "p999_lower_m": null,
+            "p999_upper_m": null
+          },
+          "vpe_ci": {
+            "p50_lower_m": null,
+            "p50_upper_m": null,
+            "p95_lower_m": null,
+            "p95_upper_m": null,
+            "p99_lower_m": null,
+            "p99_upper_m": null,
+            "p999_lower_m": null,
+            "p999_upper_m": null
+          },
+          "integrity": {
+            "service": "",
+            "protection_levels": "",
+            "hal_m": null,
+            "val_m": null,
+            "availability": null,
+            "availability_target": null,
+            "coverage": null,
+            "mi_horizontal_events": 0,
+            "mi_horizontal_rate": null,
+            "mi_horizontal_rate_upper": null,
+            "mi_vertical_events": 0,
+            "mi_vertical_rate": null,
+            "mi_vertical_rate_upper": null,
+            "hmi_horizontal_events": 0,
+            "hmi_horizontal_rate": null,
+            "hmi_horizontal_rate_upper": null,
+            "hmi_vertical_events": 0,
+            "hmi_vertical_rate": null,
+            "hmi_vertical_rate_upper": null,
+            "detection_events": 0,
+            "detection_rate": null,
+            "detection_rate_upper": null,
+            "missed_detection_events": 0,
+            "missed_detection_rate": null,
+            "missed_detection_rate_upper": null,
+            "exclusions": 0,
+            "faulted_samples": 0,
+            "worst_required_inflation": null,
+            "worst_overbound_group": ""
+          },
           "caution": "Results are for design studies only: they certify nothing, and the applicable standards, local regulations and licensed practice take precedence."
         }
         """;
