@@ -114,7 +114,8 @@ internal static class IntegrityAssembly
             int bin = group % IntegrityKernel.ElevationBins;
             rows.Add(new OverboundRow(
                 setup.Scenario.Shells[shell].Name, bin * 10.0, (bin + 1) * 10.0, r.Samples, r.Mean, r.SigmaRatio,
-                r.RequiredInflation, r.TailProbabilityChecked, r.SamplingTolerance, r.Bounded));
+                r.RequiredInflation, r.TailProbabilityChecked, r.SamplingTolerance,
+                r.RequiredInflation <= 1.0 + r.SamplingTolerance)); // within the sampling uncertainty of k
         }
 
         return rows;

@@ -79,7 +79,10 @@ public sealed record IntegrityDiagramRow(
     long Count,
     double AlertLimitMeters);
 
-/// <summary>The overbounding check of one (shell, elevation bin) (overbound.parquet).</summary>
+/// <summary>
+/// The overbounding check of one (shell, elevation bin) (overbound.parquet). Bounded: the required
+/// inflation is within 1 + its sampling tolerance.
+/// </summary>
 public sealed record OverboundRow(
     string Shell,
     double ElevationLowDeg,
