@@ -19,6 +19,9 @@ internal static class CheckReport
     /// </summary>
     public const double SolutionsPerSecondPerThread = 5e6;
 
+    /// <summary>How much slower a run with ARAIM protection levels is per user-solution (integrity-faults.toml vs integrity-demo.toml).</summary>
+    public const double AraimSlowdown = 15.0;
+
     /// <summary>Visibility is sampled on at most this many user-epochs, so check stays quick.</summary>
     private const int VisibilitySampleBudget = 200_000;
 
@@ -52,8 +55,11 @@ internal static class CheckReport
         var (min, mean, max, under4) = Visibility(s, constellation, grid, ct);
         await w.WriteLineAsync(string.Create(c, $"satellites in view (sampled): min {min}, mean {mean:0.0}, max {max}; user-epochs with fewer than 4: {under4 * 100:0.##} %")).ConfigureAwait(false);
         await w.WriteLineAsync(string.Create(c, $"samples: {grid.Count} users x {epochs} epochs x {s.Run.Trials} trials = {solutions:N0} user-solutions")).ConfigureAwait(false);
-        double seconds = solutions / (SolutionsPerSecondPerThread * Math.Max(1, threads));
+        // ARAIM draws every satellite's range per trial and runs the monitor: measured about 15x slower per solution.
+        double perThread = s.Integrity?.Method == ProtectionLevelMethod.Araim ? SolutionsPerSecondPerThread / AraimSlowdown : SolutionsPerSecondPerThread;
+        double seconds = solutions / (perThread * Math.Max(1, threads));
         await w.WriteLineAsync(string.Create(c, $"estimate: about {FormatSeconds(seconds)} on {threads} threads, about {EstimateMemoryMiB(s, grid.Count, threads):N0} MiB of memory")).ConfigureAwait(false);
+        await IntegrityLines(w, s).ConfigureAwait(false); // issue 5
         await RelativityCheckReport.WriteAsync(w, s, ct).ConfigureAwait(false); // issue 4
         await ClockReport.WriteAsync(w, s).ConfigureAwait(false);
         await w.WriteLineAsync($"caution: {Caution.Text}").ConfigureAwait(false);
@@ -109,6 +115,26 @@ internal static class CheckReport
         double scratch = threads * (3.0 * block * 8 + 3 * 400 * 8);
         double clocks = s.Clock.IsGraded ? s.TotalSatellites * block * (Unsafe.SizeOf<ClockState>() + 8.0) : 0; // one clock state per satellite and trial of a block
         return (cells * perCell + (2 * threads + 4 + 3 * Core.Simulation.SimulationSetup.EpochsPerBatch) * perEpoch + scratch + clocks) / 1048576.0 + 70;
+    }
+
+    private static async Task IntegrityLines(TextWriter w, Scenario s)
+    {
+        var c = CultureInfo.InvariantCulture;
+        if (s.Integrity is not { } i)
+        {
+            await w.WriteLineAsync("integrity: none (add an [integrity] table for protection levels and availability)").ConfigureAwait(false);
+            return;
+        }
+
+        string val = i.HasVertical ? string.Create(c, $"{i.VerticalAlertLimitMeters} m") : "none";
+        string method = i.Method == ProtectionLevelMethod.Araim
+            ? string.Create(c, $"ARAIM (sigma_URA {i.Araim.UraSigmaMeters} m, sigma_URE {i.Araim.UreSigmaMeters:0.###} m, b_nom {i.Araim.NominalBiasMeters} m, P_sat {i.Araim.SatelliteFaultPrior}, P_const {i.Araim.ConstellationFaultPrior})")
+            : string.Create(c, $"DO-229 weighted (K_H {i.KHorizontal}, K_V {i.KVertical})");
+        await w.WriteLineAsync(string.Create(c, $"integrity: {i.Service}, HAL {i.HorizontalAlertLimitMeters} m, VAL {val}, {method}; availability target {i.AvailabilityTarget}")).ConfigureAwait(false);
+        if (s.Faults is { IsActive: true } f)
+        {
+            await w.WriteLineAsync(string.Create(c, $"faults: per satellite per hour clock steps {f.ClockStepRatePerHour}, ramps {f.ClockRampRatePerHour}, orbit {f.OrbitRatePerHour}; per shell {f.ConstellationRatePerHour}; each lasting {f.DurationSeconds / 3600} h")).ConfigureAwait(false);
+        }
     }
 
     private static string FormatSeconds(double seconds) => seconds < 90

@@ -18,11 +18,45 @@ internal static class RunReport
         await w.WriteLineAsync("service area (area-weighted, pooled)   p50       p95       p99       p99.9").ConfigureAwait(false);
         await w.WriteLineAsync(Row("  HPE (m)", g.Hpe)).ConfigureAwait(false);
         await w.WriteLineAsync(Row("  VPE (m)", g.Vpe)).ConfigureAwait(false);
+        if (r.Intervals is { } ci)
+        {
+            await w.WriteLineAsync(string.Create(c, $"  95 % batch-means interval of p95 ({ci.Batches} trial batches): HPE {F(ci.Hpe[1].Lower)} to {F(ci.Hpe[1].Upper)} m, VPE {F(ci.Vpe[1].Lower)} to {F(ci.Vpe[1].Upper)} m")).ConfigureAwait(false);
+        }
+
         await w.WriteLineAsync(Worst("worst cell by HPE p95", g.WorstHpe)).ConfigureAwait(false);
         await w.WriteLineAsync(Worst("worst cell by VPE p95", g.WorstVpe)).ConfigureAwait(false);
+        if (r.Integrity is { } integrity)
+        {
+            await IntegrityLines(w, integrity).ConfigureAwait(false);
+        }
+
         await w.WriteLineAsync($"result set {folder}").ConfigureAwait(false);
         await w.WriteLineAsync($"caution    {Caution.Text}").ConfigureAwait(false);
     }
+
+    private static async Task IntegrityLines(TextWriter w, IntegrityReport i)
+    {
+        var c = CultureInfo.InvariantCulture;
+        var g = i.Global;
+        string val = double.IsNaN(i.VerticalAlertLimitMeters) ? "none" : F(i.VerticalAlertLimitMeters) + " m";
+        await w.WriteLineAsync(string.Create(c, $"integrity  {i.Service}, HAL {F(i.HorizontalAlertLimitMeters)} m, VAL {val}, {i.Method} protection levels")).ConfigureAwait(false);
+        await w.WriteLineAsync(string.Create(c, $"  availability {g.Availability * 100:0.##} % (area-weighted), coverage {g.Coverage * 100:0.##} % of the area at >= {i.AvailabilityTarget * 100:0.###} %")).ConfigureAwait(false);
+        await w.WriteLineAsync(Rate("  misleading information    H", g.MisleadingHorizontal) + Rate("   V", g.MisleadingVertical)).ConfigureAwait(false);
+        await w.WriteLineAsync(Rate("  hazardously misleading    H", g.HazardousHorizontal) + Rate("   V", g.HazardousVertical)).ConfigureAwait(false);
+        if (i.Method == "araim")
+        {
+            await w.WriteLineAsync(string.Create(c, $"  monitor: {g.Detections.Events:N0} detections, {g.Exclusions:N0} exclusions, {g.MissedDetections.Events:N0} missed of {g.FaultedSamples:N0} faulted samples")).ConfigureAwait(false);
+        }
+
+        string overbound = double.IsNaN(g.WorstRequiredInflation)
+            ? "no bin had enough samples for a verdict"
+            : string.Create(c, $"worst required inflation {F(g.WorstRequiredInflation)} ({g.WorstOverboundGroup})");
+        await w.WriteLineAsync($"  overbounding: {overbound}; see overbound.parquet").ConfigureAwait(false);
+        await w.WriteLineAsync("  (analysis for design and safety studies, not a certified integrity monitor: the applicable standards and authorities decide)").ConfigureAwait(false);
+    }
+
+    private static string Rate(string label, EventRate r) => string.Create(
+        CultureInfo.InvariantCulture, $"{label} {r.Events:N0} ({(double.IsNaN(r.Rate) ? "-" : r.Rate.ToString("0.###E+0", CultureInfo.InvariantCulture))}, <= {(double.IsNaN(r.Upper) ? "-" : r.Upper.ToString("0.###E+0", CultureInfo.InvariantCulture))} at 95 %)");
 
     private static string Row(string label, PercentileSet p) => string.Create(
         CultureInfo.InvariantCulture,
