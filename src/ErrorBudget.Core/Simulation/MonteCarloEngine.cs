@@ -79,23 +79,8 @@ public static class MonteCarloEngine
                     kernel.Process(work, job.Tile, scratch);
                     EpochAccumulator acc = work.Accumulator;
                     int epoch = work.Epoch;
-                    for (int b = 0; b < scratch.Batches && scratch.Batches > 1; b++)
-                    {
-                        scratch.HpeRun[b].Merge(scratch.HpeBatches[b]);
-                        scratch.VpeRun[b].Merge(scratch.VpeBatches[b]);
-                    }
-
                     lock (acc.Gate)
                     {
-                        if (scratch.Batches > 1)
-                        {
-                            for (int b = 0; b < scratch.Batches; b++)
-                            {
-                                acc.Hpe.Merge(scratch.HpeBatches[b]);
-                                acc.Vpe.Merge(scratch.VpeBatches[b]);
-                            }
-                        }
-
                         acc.Hpe.Merge(scratch.Hpe);
                         acc.Vpe.Merge(scratch.Vpe);
                         acc.Pdop.Merge(scratch.Pdop);

@@ -10,14 +10,10 @@ internal sealed class TileScratch
     public TileScratch(int satellites, int laneCapacity, double relativeAccuracy, int batches = 1)
     {
         Batches = batches;
-        HpeBatches = new DDSketch[batches];
-        VpeBatches = new DDSketch[batches];
         HpeRun = new DDSketch[batches];
         VpeRun = new DDSketch[batches];
         for (int b = 0; b < batches; b++)
         {
-            HpeBatches[b] = new DDSketch(relativeAccuracy);
-            VpeBatches[b] = new DDSketch(relativeAccuracy);
             HpeRun[b] = new DDSketch(relativeAccuracy);
             VpeRun[b] = new DDSketch(relativeAccuracy);
         }
@@ -79,11 +75,10 @@ internal sealed class TileScratch
     /// <summary>Trial batches of the batch-means intervals (1: none; the epoch share is then <see cref="Hpe"/> alone).</summary>
     public int Batches { get; }
 
-    /// <summary>With batches: this job's epoch share split by trial batch (merged into the epoch and into <see cref="HpeRun"/>).</summary>
-    public DDSketch[] HpeBatches { get; }
-    public DDSketch[] VpeBatches { get; }
-
-    /// <summary>This worker's run-long area-weighted sketches per trial batch, merged once at the end.</summary>
+    /// <summary>
+    /// This worker's run-long area-weighted sketches per trial batch: the kernel adds each key to its
+    /// batch here directly (no per-epoch merge), and the workers' sketches are merged once at the end.
+    /// </summary>
     public DDSketch[] HpeRun { get; }
     public DDSketch[] VpeRun { get; }
 
@@ -123,11 +118,6 @@ internal sealed class TileScratch
     {
         Hpe.Clear();
         Vpe.Clear();
-        for (int b = 0; b < Batches; b++)
-        {
-            HpeBatches[b].Clear();
-            VpeBatches[b].Clear();
-        }
 
         Pdop.Clear();
         WeightSum = 0;

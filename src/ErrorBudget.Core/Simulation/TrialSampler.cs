@@ -119,8 +119,8 @@ internal static class TrialSampler
         }
 
         ReadOnlySpan<int> ends = s.SegmentEnds.AsSpan(0, s.SegmentCount);
-        DDSketch.AddKeysSegmented(h, acc.Hpe, 1, ends, s.HpeBatches.AsSpan(s.FirstSegmentBatch, s.SegmentCount), weight);
-        DDSketch.AddKeysSegmented(v, acc.Vpe, 1, ends, s.VpeBatches.AsSpan(s.FirstSegmentBatch, s.SegmentCount), weight);
+        DDSketch.AddKeysSegmented(h, acc.Hpe, 1, s.Hpe, weight, ends, s.HpeRun.AsSpan(s.FirstSegmentBatch, s.SegmentCount));
+        DDSketch.AddKeysSegmented(v, acc.Vpe, 1, s.Vpe, weight, ends, s.VpeRun.AsSpan(s.FirstSegmentBatch, s.SegmentCount));
     }
 
     /// <summary>Sketch keys ceil(ln x / ln gamma) of four values, the zero key at or below MinIndexable.</summary>

@@ -119,16 +119,18 @@ public sealed partial class DDSketch
 
     /// <summary>Lowest and highest non-zero key of a span (empty: lo &gt; hi) and how many zero keys it holds.</summary>
     /// <summary>
-    /// Adds every key to <paramref name="first"/> with <paramref name="firstWeight"/>, and the keys of
-    /// segment g (keys [ends[g-1], ends[g]), ends[-1] = 0) to <paramref name="seconds"/>[g] with
-    /// <paramref name="secondWeight"/>: one scan of the keys and one range reservation per sketch,
-    /// then plain increments. Used to split an epoch's samples into trial batches at no extra pass.
+    /// Adds every key to <paramref name="first"/> (weight <paramref name="firstWeight"/>) and to
+    /// <paramref name="all"/> (weight <paramref name="allWeight"/>), and the keys of segment g
+    /// (keys [ends[g-1], ends[g]), ends[-1] = 0) to <paramref name="segments"/>[g] with
+    /// <paramref name="allWeight"/>: one scan of the keys and one range reservation per sketch, then
+    /// plain increments. Splits an epoch's samples into trial batches without a second pass.
     /// </summary>
     public static void AddKeysSegmented(
-        ReadOnlySpan<int> keys, DDSketch first, long firstWeight, ReadOnlySpan<int> ends, ReadOnlySpan<DDSketch> seconds, long secondWeight)
+        ReadOnlySpan<int> keys, DDSketch first, long firstWeight, DDSketch all, long allWeight, ReadOnlySpan<int> ends, ReadOnlySpan<DDSketch> segments)
     {
         ArgumentNullException.ThrowIfNull(first);
-        if (ends.Length != seconds.Length || (ends.Length > 0 && ends[^1] != keys.Length))
+        ArgumentNullException.ThrowIfNull(all);
+        if (ends.Length != segments.Length || (ends.Length > 0 && ends[^1] != keys.Length))
         {
             throw new ArgumentException("Need one sketch per segment and segments that end at the last key.", nameof(ends));
         }
@@ -137,14 +139,16 @@ public sealed partial class DDSketch
         if (lo <= hi)
         {
             first.ReserveKeys(lo, hi);
+            all.ReserveKeys(lo, hi);
         }
 
         ref long a0 = ref MemoryMarshal.GetArrayDataReference(first.counts);
-        int aShift = first.offset;
+        ref long c0 = ref MemoryMarshal.GetArrayDataReference(all.counts);
+        int aShift = first.offset, cShift = all.offset;
         int start = 0;
-        for (int g = 0; g < seconds.Length; g++)
+        for (int g = 0; g < segments.Length; g++)
         {
-            DDSketch second = seconds[g];
+            DDSketch second = segments[g];
             ReadOnlySpan<int> segment = keys[start..ends[g]];
             start = ends[g];
             if (lo <= hi)
@@ -160,7 +164,8 @@ public sealed partial class DDSketch
                 if (key != ZeroKey)
                 {
                     Unsafe.Add(ref a0, key - aShift) += firstWeight;
-                    Unsafe.Add(ref b0, key - bShift) += secondWeight;
+                    Unsafe.Add(ref b0, key - bShift) += allWeight;
+                    Unsafe.Add(ref c0, key - cShift) += allWeight;
                 }
                 else
                 {
@@ -168,10 +173,11 @@ public sealed partial class DDSketch
                 }
             }
 
-            second.AddTotals(segment.Length, segmentZeros, secondWeight);
+            second.AddTotals(segment.Length, segmentZeros, allWeight);
         }
 
         first.AddTotals(keys.Length, zeros, firstWeight);
+        all.AddTotals(keys.Length, zeros, allWeight);
     }
 
     private static void ScanKeys(ReadOnlySpan<int> keys, out int lo, out int hi, out long zeros)
