@@ -68,11 +68,15 @@ internal static class BenchCommand
             double write = clock.Elapsed.TotalSeconds;
             Directory.Delete(folder, recursive: true);
 
+            // Issue 5: the solution-separation algorithm alone on W1's geometry (12 epochs, 20 trials each).
+            var (araimEvaluate, araimTest, _) = Core.Integrity.Araim.AraimCostProbe.Measure(scenario, 12, 20);
+
             long users = result.Cells.Count;
             long solutions = users * result.Epochs.Count * result.Metadata.Trials;
             var figures = new BenchFigures(
                 WorkloadName, users, result.Epochs.Count, result.Metadata.Trials, solutions, solutions / simulate,
-                simulate, write, Process.GetCurrentProcess().PeakWorkingSet64, threads, Environment.ProcessorCount, CliApp.ToolVersion);
+                simulate, write, Process.GetCurrentProcess().PeakWorkingSet64, threads, Environment.ProcessorCount, CliApp.ToolVersion,
+                araimEvaluate, araimTest);
             if (json)
             {
                 await context.Output.WriteLineAsync(JsonSerializer.Serialize(figures, BenchJson.Default.BenchFigures)).ConfigureAwait(false);
@@ -97,5 +101,6 @@ internal static class BenchCommand
         simulation               {f.SimulationSeconds:0.00} s
         writing the result set   {f.WriteSeconds:0.00} s
         peak memory              {f.PeakMemoryBytes / 1048576.0:0} MiB
+        ARAIM (one thread)       {f.AraimEvaluateMicroseconds:0.0} us per user-epoch (subsets, thresholds, PL search), {f.AraimTestMicroseconds:0.00} us per trial (detection test)
         """));
 }

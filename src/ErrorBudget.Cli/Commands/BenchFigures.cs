@@ -15,7 +15,9 @@ internal sealed record BenchFigures(
     [property: JsonPropertyName("peak_memory_bytes")] long PeakMemoryBytes,
     [property: JsonPropertyName("threads")] int Threads,
     [property: JsonPropertyName("processor_count")] int ProcessorCount,
-    [property: JsonPropertyName("tool_version")] string ToolVersion);
+    [property: JsonPropertyName("tool_version")] string ToolVersion,
+    [property: JsonPropertyName("araim_evaluate_us_per_user_epoch")] double AraimEvaluateMicroseconds,
+    [property: JsonPropertyName("araim_test_us_per_trial")] double AraimTestMicroseconds);
 
 [JsonSerializable(typeof(BenchFigures))]
 internal sealed partial class BenchJson : JsonSerializerContext;

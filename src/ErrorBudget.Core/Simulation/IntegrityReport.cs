@@ -35,7 +35,14 @@ public sealed record IntegrityCellRow(
     long Detections,
     long Exclusions,
     long FaultedSamples,
-    long MissedDetections);
+    long MissedDetections)
+{
+    /// <summary>95 % Clopper-Pearson upper bounds of the cell's rates: MI over all samples, HMI over the available ones.</summary>
+    public double MisleadingHorizontalUpper => EventRate.Of(MisleadingHorizontal, Samples).Upper;
+    public double MisleadingVerticalUpper => EventRate.Of(MisleadingVertical, Samples).Upper;
+    public double HazardousHorizontalUpper => EventRate.Of(HazardousHorizontal, AvailableSamples).Upper;
+    public double HazardousVerticalUpper => EventRate.Of(HazardousVertical, AvailableSamples).Upper;
+}
 
 /// <summary>A count of events among samples, its rate and the 95 % Clopper-Pearson interval of the rate.</summary>
 public sealed record EventRate(long Events, long Samples, double Rate, double Lower, double Upper)
