@@ -9,8 +9,8 @@ namespace ErrorBudget.Core.Simulation;
 /// The hot loop over the trials of one (epoch, user): position error from the satellite-level
 /// errors through the coefficients, plus the user-level part L z, then HPE and VPE into the
 /// cell's and the epoch's sketches. Two twins give the same answers (a test holds them to it):
-/// <see cref="SampleVector"/> computes eight trials per step in two Vector256 (lanes = trials, the
-/// padded lanes of the last step are computed and discarded), <see cref="SampleScalar"/> one at a time.
+/// <see cref="SampleVector"/> computes four trials per Vector256 (lanes = trials, the padded lanes
+/// of the last vector are computed and discarded), <see cref="SampleScalar"/> one at a time.
 /// </summary>
 internal static class TrialSampler
 {
@@ -40,43 +40,30 @@ internal static class TrialSampler
         var u0 = Vector256.Create(s.CommonOffset[2]);
         IntegrityScratch? values = s.Integrity;
 
-        // Two vectors (eight trials) per step: the satellite loop's coefficient broadcasts are shared
-        // and two independent accumulation chains hide the multiply-add latency. Blocks are padded to
-        // whole normal batches (8), so the padded lanes are there to compute and discard.
-        for (int j = 0; j < trials; j += 2 * Vector256<double>.Count)
+        // One vector (four trials) per step. Two vectors per step with shared broadcasts measured no
+        // faster (A/B in a scratch program, 2026-12-01): the loop is bound by its loads, not latency.
+        for (int j = 0; j < trials; j += Vector256<double>.Count)
         {
-            var ea = e0;
-            var na = n0;
-            var ua = u0;
-            var eb = e0;
-            var nb = n0;
-            var ub = u0;
+            var e = e0;
+            var n = n0;
+            var u = u0;
             for (int i = 0; i < m; i++)
             {
                 int b = visible[i] * 4 * stride + j;
+                var x0 = Vector256.LoadUnsafe(ref err, (nuint)b);
+                var x1 = Vector256.LoadUnsafe(ref err, (nuint)(b + stride));
+                var x2 = Vector256.LoadUnsafe(ref err, (nuint)(b + 2 * stride));
+                var x3 = Vector256.LoadUnsafe(ref err, (nuint)(b + 3 * stride));
                 ref double c = ref Unsafe.Add(ref coef, i * 8);
-                var cx = Vector256.Create(c);
-                var cy = Vector256.Create(Unsafe.Add(ref c, 1));
-                var cz = Vector256.Create(Unsafe.Add(ref c, 2));
-                var rangeA = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref err, (nuint)b), cx, Vector256.LoadUnsafe(ref err, (nuint)(b + 3 * stride)));
-                var rangeB = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref err, (nuint)(b + 4)), cx, Vector256.LoadUnsafe(ref err, (nuint)(b + 3 * stride + 4)));
-                rangeA = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref err, (nuint)(b + stride)), cy, rangeA);
-                rangeB = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref err, (nuint)(b + stride + 4)), cy, rangeB);
-                rangeA = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref err, (nuint)(b + 2 * stride)), cz, rangeA);
-                rangeB = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref err, (nuint)(b + 2 * stride + 4)), cz, rangeB);
-                var se = Vector256.Create(Unsafe.Add(ref c, 3));
-                var sn = Vector256.Create(Unsafe.Add(ref c, 4));
-                var su = Vector256.Create(Unsafe.Add(ref c, 5));
-                ea = Vector256.FusedMultiplyAdd(rangeA, se, ea);
-                eb = Vector256.FusedMultiplyAdd(rangeB, se, eb);
-                na = Vector256.FusedMultiplyAdd(rangeA, sn, na);
-                nb = Vector256.FusedMultiplyAdd(rangeB, sn, nb);
-                ua = Vector256.FusedMultiplyAdd(rangeA, su, ua);
-                ub = Vector256.FusedMultiplyAdd(rangeB, su, ub);
+                var range = Vector256.FusedMultiplyAdd(x0, Vector256.Create(c), x3);
+                range = Vector256.FusedMultiplyAdd(x1, Vector256.Create(Unsafe.Add(ref c, 1)), range);
+                range = Vector256.FusedMultiplyAdd(x2, Vector256.Create(Unsafe.Add(ref c, 2)), range);
+                e = Vector256.FusedMultiplyAdd(range, Vector256.Create(Unsafe.Add(ref c, 3)), e);
+                n = Vector256.FusedMultiplyAdd(range, Vector256.Create(Unsafe.Add(ref c, 4)), n);
+                u = Vector256.FusedMultiplyAdd(range, Vector256.Create(Unsafe.Add(ref c, 5)), u);
             }
 
-            Finish(ea, na, ua, ref z, j, stride, l0, l3, l4, l6, l7, l8, inverseLnGamma, minIndexable, keysH, keysV, values);
-            Finish(eb, nb, ub, ref z, j + 4, stride, l0, l3, l4, l6, l7, l8, inverseLnGamma, minIndexable, keysH, keysV, values);
+            Finish(e, n, u, ref z, j, stride, l0, l3, l4, l6, l7, l8, inverseLnGamma, minIndexable, keysH, keysV, values);
         }
 
         AddAll(acc, weight, s, trials);
