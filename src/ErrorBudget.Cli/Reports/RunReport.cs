@@ -41,6 +41,11 @@ internal static class RunReport
         string val = double.IsNaN(i.VerticalAlertLimitMeters) ? "none" : F(i.VerticalAlertLimitMeters) + " m";
         await w.WriteLineAsync(string.Create(c, $"integrity  {i.Service}, HAL {F(i.HorizontalAlertLimitMeters)} m, VAL {val}, {i.Method} protection levels")).ConfigureAwait(false);
         await w.WriteLineAsync(string.Create(c, $"  availability {g.Availability * 100:0.##} % (area-weighted), coverage {g.Coverage * 100:0.##} % of the area at >= {i.AvailabilityTarget * 100:0.###} %")).ConfigureAwait(false);
+        if (!double.IsNaN(g.AccuracyAreaShare))
+        {
+            await w.WriteLineAsync(string.Create(c, $"  accuracy: {g.AccuracyAreaShare * 100:0.##} % of the area meets HPE p95 <= {F(g.HorizontalAccuracy95Meters)} m and VPE p95 <= {(double.IsNaN(g.VerticalAccuracy95Meters) ? "-" : F(g.VerticalAccuracy95Meters))} m")).ConfigureAwait(false);
+        }
+
         await w.WriteLineAsync(Rate("  misleading information    H", g.MisleadingHorizontal) + Rate("   V", g.MisleadingVertical)).ConfigureAwait(false);
         await w.WriteLineAsync(Rate("  hazardously misleading    H", g.HazardousHorizontal) + Rate("   V", g.HazardousVertical)).ConfigureAwait(false);
         if (i.Method == "araim")

@@ -88,7 +88,7 @@ internal static class IntegrityKeys
     public static IntegritySpec BuildIntegrity(SectionValues v, double assumedUreSigmaMeters)
     {
         string service = v.Text("service");
-        double hal, val, kh, kv;
+        double hal, val, kh, kv, h95 = double.NaN, v95 = double.NaN;
         if (service == Custom)
         {
             hal = v.Number("hal_m");
@@ -103,6 +103,8 @@ internal static class IntegrityKeys
             val = level.VerticalAlertLimitMeters;
             kh = level.KHorizontal;
             kv = level.KVertical;
+            h95 = level.HorizontalAccuracy95Meters;
+            v95 = level.VerticalAccuracy95Meters;
         }
 
         double ura = v.Has("ura_sigma_m") ? v.Number("ura_sigma_m") : assumedUreSigmaMeters;
@@ -116,6 +118,8 @@ internal static class IntegrityKeys
             v.Number("availability_target"),
             (int)v.Integer("overbound_trials"))
         {
+            HorizontalAccuracy95Meters = h95,
+            VerticalAccuracy95Meters = v95,
             Araim = new AraimSpec(
                 ura,
                 v.Has("ure_sigma_m") ? v.Number("ure_sigma_m") : ura * 2.0 / 3.0,

@@ -25,6 +25,10 @@ public sealed record IntegritySpec(
     /// <summary>ARAIM user parameters (used with <see cref="ProtectionLevelMethod.Araim"/>).</summary>
     public AraimSpec Araim { get; init; } = AraimSpec.Baseline(1.0);
 
+    /// <summary>95 % accuracy requirements of the preset (ICAO Annex 10 Table 3.7.2.4-1), m; NaN for none (custom).</summary>
+    public double HorizontalAccuracy95Meters { get; init; } = double.NaN;
+    public double VerticalAccuracy95Meters { get; init; } = double.NaN;
+
     /// <summary>True when the service has a vertical alert limit.</summary>
     public bool HasVertical => !double.IsNaN(VerticalAlertLimitMeters);
 }

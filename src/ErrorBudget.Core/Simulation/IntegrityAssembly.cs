@@ -5,7 +5,7 @@ namespace ErrorBudget.Core.Simulation;
 /// <summary>Builds the [integrity] report from the cells' accumulators and the workers' diagrams and histograms.</summary>
 internal static class IntegrityAssembly
 {
-    public static IntegrityReport Build(SimulationSetup setup, IntegrityKernel kernel, CellAccumulator[] cells, IReadOnlyList<TileScratch> scratches)
+    public static IntegrityReport Build(SimulationSetup setup, IntegrityKernel kernel, CellAccumulator[] cells, IReadOnlyList<TileScratch> scratches, IReadOnlyList<CellResult> cellResults)
     {
         var spec = kernel.Spec;
         var rows = new IntegrityCellRow[cells.Length];
@@ -55,7 +55,12 @@ internal static class IntegrityAssembly
             exclusions,
             faulted,
             worst?.RequiredInflation ?? double.NaN,
-            worst is null ? "" : $"{worst.Shell} {worst.ElevationLowDeg:0}-{worst.ElevationHighDeg:0} deg");
+            worst is null ? "" : $"{worst.Shell} {worst.ElevationLowDeg:0}-{worst.ElevationHighDeg:0} deg")
+        {
+            HorizontalAccuracy95Meters = spec.HorizontalAccuracy95Meters,
+            VerticalAccuracy95Meters = spec.VerticalAccuracy95Meters,
+            AccuracyAreaShare = AccuracyShare(spec, cellResults, weightSum),
+        };
         return new IntegrityReport(
             spec.Service,
             spec.Method == Scenarios.ProtectionLevelMethod.Araim ? "araim" : "weighted",
@@ -66,6 +71,25 @@ internal static class IntegrityAssembly
             global,
             Diagram(spec, scratches),
             overbound);
+    }
+
+    /// <summary>Area share of cells whose HPE and VPE 95th percentiles meet the requirements that exist; NaN without any.</summary>
+    private static double AccuracyShare(Scenarios.IntegritySpec spec, IReadOnlyList<CellResult> cells, double weightSum)
+    {
+        bool h = !double.IsNaN(spec.HorizontalAccuracy95Meters), v = !double.IsNaN(spec.VerticalAccuracy95Meters);
+        if ((!h && !v) || weightSum <= 0)
+        {
+            return double.NaN;
+        }
+
+        double met = 0;
+        foreach (var c in cells)
+        {
+            bool ok = (!h || c.Hpe.P95 <= spec.HorizontalAccuracy95Meters) && (!v || c.Vpe.P95 <= spec.VerticalAccuracy95Meters);
+            met += ok ? c.AreaWeight : 0.0;
+        }
+
+        return met / weightSum;
     }
 
     private static List<IntegrityDiagramRow> Diagram(Scenarios.IntegritySpec spec, IReadOnlyList<TileScratch> scratches)

@@ -74,7 +74,13 @@ public sealed record IntegrityGlobal(
     long Exclusions,
     long FaultedSamples,
     double WorstRequiredInflation,
-    string WorstOverboundGroup);
+    string WorstOverboundGroup)
+{
+    /// <summary>The service's 95 % accuracy requirements (NaN: none) and the area-weighted share of cells meeting both.</summary>
+    public double HorizontalAccuracy95Meters { get; init; } = double.NaN;
+    public double VerticalAccuracy95Meters { get; init; } = double.NaN;
+    public double AccuracyAreaShare { get; init; } = double.NaN;
+}
 
 /// <summary>One non-empty cell of an integrity diagram (integrity.parquet).</summary>
 public sealed record IntegrityDiagramRow(

@@ -148,7 +148,7 @@ public static class MonteCarloEngine
         var scratches = scratchPool.ToArray();
         return new RunResult(scenario, metadata, cellResults, epochs, global)
         {
-            Integrity = integrity is null ? null : IntegrityAssembly.Build(setup, integrity, cells, scratches),
+            Integrity = integrity is null ? null : IntegrityAssembly.Build(setup, integrity, cells, scratches, cellResults),
             Intervals = batches < 2 ? null : BatchIntervalAssembly.Build(scratches, batches),
             Relativity = relativity,
             // Clock grades (issue 3): the grade's model vs simulated ADEV, and the sampler's age-of-data statistics.
