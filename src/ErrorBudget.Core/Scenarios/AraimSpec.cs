@@ -16,6 +16,12 @@ public sealed record AraimSpec(
     double SatelliteFaultPrior,
     double ConstellationFaultPrior)
 {
+    /// <summary>Integrity and continuity allocations (WG-C ARAIM ADD v3.0 baseline, from memory): PHMI_VERT, PHMI_HOR, P_FA_VERT, P_FA_HOR.</summary>
+    public double PhmiVertical { get; init; } = 9.8e-8;
+    public double PhmiHorizontal { get; init; } = 2e-9;
+    public double FalseAlarmVertical { get; init; } = 3.9e-6;
+    public double FalseAlarmHorizontal { get; init; } = 9e-8;
+
     /// <summary>
     /// WG-C ARAIM TSG baseline simulation values (from memory, see REFERENCE-VALUES section 5):
     /// sigma_URE = 2/3 sigma_URA, b_nom = 0.75 m, P_sat = 1e-5, P_const = 1e-4.

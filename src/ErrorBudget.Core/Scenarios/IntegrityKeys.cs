@@ -24,9 +24,14 @@ internal static class IntegrityKeys
         KeySpec.Number("nominal_bias_m", min: 0, max: 100, defaultValue: 0.75),
         KeySpec.Number("p_sat", min: 0, max: 0.1, defaultValue: 1e-5),
         KeySpec.Number("p_const", min: 0, max: 0.1, defaultValue: 1e-4),
+        KeySpec.Number("phmi_vertical", min: 0, max: 1e-2, defaultValue: 9.8e-8, minInclusive: false),
+        KeySpec.Number("phmi_horizontal", min: 0, max: 1e-2, defaultValue: 2e-9, minInclusive: false),
+        KeySpec.Number("pfa_vertical", min: 0, max: 1e-2, defaultValue: 3.9e-6, minInclusive: false),
+        KeySpec.Number("pfa_horizontal", min: 0, max: 1e-2, defaultValue: 9e-8, minInclusive: false),
     ]);
 
-    private static readonly string[] AraimOnly = ["ura_sigma_m", "ure_sigma_m", "nominal_bias_m", "p_sat", "p_const"];
+    private static readonly string[] AraimOnly =
+        ["ura_sigma_m", "ure_sigma_m", "nominal_bias_m", "p_sat", "p_const", "phmi_vertical", "phmi_horizontal", "pfa_vertical", "pfa_horizontal"];
 
     public static readonly TableSpec Faults = new("faults", IsArray: false, Required: false,
     [
@@ -70,6 +75,13 @@ internal static class IntegrityKeys
                 integrity.Fail(errors, key, $"is an ARAIM parameter but {integrity.Describe("protection_levels")}",
                     $"leave it out, or set integrity.protection_levels = \"{Araim}\"");
             }
+        }
+
+        // sigma_URE bounds sigma_URA from below in an integrity support message (common practice); the
+        // exclusion test relies on C_acc <= C_int.
+        if (hasIntegrity && integrity.Has("ura_sigma_m", "ure_sigma_m") && integrity.Number("ure_sigma_m") > integrity.Number("ura_sigma_m"))
+        {
+            integrity.Fail(errors, "ure_sigma_m", $"is above {integrity.Describe("ura_sigma_m")}", "ure_sigma_m <= ura_sigma_m");
         }
 
         Ordered(faults, "clock_step_min_m", "clock_step_max_m", errors);
@@ -125,7 +137,13 @@ internal static class IntegrityKeys
                 v.Has("ure_sigma_m") ? v.Number("ure_sigma_m") : ura * 2.0 / 3.0,
                 v.Number("nominal_bias_m"),
                 v.Number("p_sat"),
-                v.Number("p_const")),
+                v.Number("p_const"))
+            {
+                PhmiVertical = v.Number("phmi_vertical"),
+                PhmiHorizontal = v.Number("phmi_horizontal"),
+                FalseAlarmVertical = v.Number("pfa_vertical"),
+                FalseAlarmHorizontal = v.Number("pfa_horizontal"),
+            },
         };
     }
 

@@ -44,6 +44,10 @@ internal sealed class IntegrityKernel
         PSat = _spec.Araim.SatelliteFaultPrior,
         PConst = _spec.Araim.ConstellationFaultPrior,
         NominalBiasIntegrityMeters = _spec.Araim.NominalBiasMeters,
+        PhmiVertical = _spec.Araim.PhmiVertical,
+        PhmiHorizontal = _spec.Araim.PhmiHorizontal,
+        PFalseAlarmVertical = _spec.Araim.FalseAlarmVertical,
+        PFalseAlarmHorizontal = _spec.Araim.FalseAlarmHorizontal,
     };
 
     /// <summary>
