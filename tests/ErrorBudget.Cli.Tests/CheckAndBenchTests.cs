@@ -43,5 +43,16 @@ public sealed class CheckAndBenchTests
         Assert.True(root.GetProperty("peak_memory_bytes").GetInt64() > 0);
         Assert.Equal(2, root.GetProperty("threads").GetInt32());
         Assert.Equal(2592L * 288, root.GetProperty("user_solutions").GetInt64());
+        // Issue 6: the per-stage split and the parallel efficiency; issue 5: the ARAIM algorithm's own cost.
+        var stages = root.GetProperty("stage_seconds");
+        foreach (string stage in new[] { "satellite_errors", "geometry", "user_normals", "projection", "sketches", "integrity", "writing" })
+        {
+            Assert.True(stages.GetProperty(stage).GetDouble() >= 0, stage);
+        }
+
+        Assert.True(stages.GetProperty("geometry").GetDouble() > 0);
+        Assert.InRange(root.GetProperty("parallel_efficiency").GetDouble(), 0.05, 1.5);
+        Assert.True(root.GetProperty("araim_evaluate_us_per_user_epoch").GetDouble() > 0);
+        Assert.True(root.GetProperty("araim_test_us_per_trial").GetDouble() > 0);
     }
 }

@@ -11,8 +11,10 @@ namespace ErrorBudget.Cli.Commands;
 
 /// <summary>
 /// `errorbudget bench`: runs the fixed workload W1 (scenarios/w1.toml, embedded in the tool) and
-/// reports user-solutions per second (users x epochs x trials / simulation wall time), the time to
-/// write the result set, and the peak memory of the process.
+/// reports user-solutions per second (users x epochs x trials / simulation wall time of the first,
+/// cold run), the time to write the result set, the peak memory of the process after that run; then
+/// a run with stage timers, two warm runs (N threads, one thread) for the parallel efficiency, and the
+/// ARAIM algorithm's own cost.
 /// </summary>
 internal static class BenchCommand
 {
@@ -62,11 +64,29 @@ internal static class BenchCommand
             RunResult result = await ProgressDisplay.RunAsync(
                 context, quiet || json, "bench w1", p => MonteCarloEngine.RunAsync(scenario, options with { Progress = p }, ct)).ConfigureAwait(false);
             double simulate = clock.Elapsed.TotalSeconds;
+            long peakMemory = Process.GetCurrentProcess().PeakWorkingSet64; // before the extra runs below
             string folder = Path.Combine(Path.GetTempPath(), "errorbudget-bench-" + Guid.NewGuid().ToString("N"));
             clock.Restart();
             await ResultSetWriter.WriteAsync(result, folder, force: false, ct).ConfigureAwait(false);
             double write = clock.Elapsed.TotalSeconds;
             Directory.Delete(folder, recursive: true);
+
+            // Issue 6: where the time goes (a second run with stage timers, which cost a few per cent) and the
+            // parallel efficiency (a one-thread run: rate with N threads / (N x rate with one)).
+            clock.Restart();
+            RunResult staged = await MonteCarloEngine.RunAsync(scenario, options with { MeasureStages = true }, ct).ConfigureAwait(false);
+            double stagedSeconds = clock.Elapsed.TotalSeconds;
+            double efficiency = double.NaN;
+            if (threads > 1)
+            {
+                // Both warm (the first run above also pays for compiling the kernel).
+                clock.Restart();
+                await MonteCarloEngine.RunAsync(scenario, options, ct).ConfigureAwait(false);
+                double warm = clock.Elapsed.TotalSeconds;
+                clock.Restart();
+                await MonteCarloEngine.RunAsync(scenario, options with { Threads = 1 }, ct).ConfigureAwait(false);
+                efficiency = clock.Elapsed.TotalSeconds / warm / threads;
+            }
 
             // Issue 5: the solution-separation algorithm alone on W1's geometry (12 epochs, 20 trials each).
             var (araimEvaluate, araimTest, _) = Core.Integrity.Araim.AraimCostProbe.Measure(scenario, 12, 20);
@@ -75,8 +95,8 @@ internal static class BenchCommand
             long solutions = users * result.Epochs.Count * result.Metadata.Trials;
             var figures = new BenchFigures(
                 WorkloadName, users, result.Epochs.Count, result.Metadata.Trials, solutions, solutions / simulate,
-                simulate, write, Process.GetCurrentProcess().PeakWorkingSet64, threads, Environment.ProcessorCount, CliApp.ToolVersion,
-                araimEvaluate, araimTest);
+                simulate, write, peakMemory, threads, Environment.ProcessorCount, CliApp.ToolVersion,
+                araimEvaluate, araimTest, efficiency, BenchStages.From(staged.Stages!, stagedSeconds, write));
             if (json)
             {
                 await context.Output.WriteLineAsync(JsonSerializer.Serialize(figures, BenchJson.Default.BenchFigures)).ConfigureAwait(false);
@@ -101,6 +121,8 @@ internal static class BenchCommand
         simulation               {f.SimulationSeconds:0.00} s
         writing the result set   {f.WriteSeconds:0.00} s
         peak memory              {f.PeakMemoryBytes / 1048576.0:0} MiB
+        parallel speedup         {(double.IsNaN(f.ParallelEfficiency) ? "-" : (f.ParallelEfficiency * f.Threads).ToString("0.00", CultureInfo.InvariantCulture))} on {f.Threads} threads (efficiency {(double.IsNaN(f.ParallelEfficiency) ? "-" : f.ParallelEfficiency.ToString("0.00", CultureInfo.InvariantCulture))}; warm runs, one-thread time / {f.Threads}-thread time)
+        stages (thread seconds)  satellite errors {f.Stages.SatelliteErrors:0.00}, geometry {f.Stages.Geometry:0.00}, user normals {f.Stages.UserNormals:0.00}, projection {f.Stages.Projection:0.00}, sketches {f.Stages.Sketches:0.00}, integrity {f.Stages.Integrity:0.00}, writing {f.Stages.Writing:0.00} (timed run: {f.Stages.WallSeconds:0.00} s)
         ARAIM (one thread)       {f.AraimEvaluateMicroseconds:0.0} us per user-epoch (subsets, thresholds, PL search), {f.AraimTestMicroseconds:0.00} us per trial (detection test)
         """));
 }

@@ -17,7 +17,25 @@ internal sealed record BenchFigures(
     [property: JsonPropertyName("processor_count")] int ProcessorCount,
     [property: JsonPropertyName("tool_version")] string ToolVersion,
     [property: JsonPropertyName("araim_evaluate_us_per_user_epoch")] double AraimEvaluateMicroseconds,
-    [property: JsonPropertyName("araim_test_us_per_trial")] double AraimTestMicroseconds);
+    [property: JsonPropertyName("araim_test_us_per_trial")] double AraimTestMicroseconds,
+    [property: JsonPropertyName("parallel_efficiency")] double ParallelEfficiency,
+    [property: JsonPropertyName("stage_seconds")] BenchStages Stages);
+
+/// <summary>Thread seconds per stage of the timed run (summed over workers), and the writing time.</summary>
+internal sealed record BenchStages(
+    [property: JsonPropertyName("satellite_errors")] double SatelliteErrors,
+    [property: JsonPropertyName("geometry")] double Geometry,
+    [property: JsonPropertyName("user_normals")] double UserNormals,
+    [property: JsonPropertyName("projection")] double Projection,
+    [property: JsonPropertyName("sketches")] double Sketches,
+    [property: JsonPropertyName("integrity")] double Integrity,
+    [property: JsonPropertyName("writing")] double Writing,
+    [property: JsonPropertyName("timed_run_wall_seconds")] double WallSeconds)
+{
+    public static BenchStages From(Core.Simulation.StageTimes t, double wallSeconds, double writeSeconds) => new(
+        t.SatelliteErrorsSeconds, t.GeometrySeconds, t.UserNormalsSeconds, t.ProjectionSeconds, t.SketchesSeconds, t.IntegritySeconds, writeSeconds, wallSeconds);
+}
 
 [JsonSerializable(typeof(BenchFigures))]
+[JsonSerializable(typeof(BenchStages))]
 internal sealed partial class BenchJson : JsonSerializerContext;

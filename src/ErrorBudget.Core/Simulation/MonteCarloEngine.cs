@@ -43,13 +43,16 @@ public static class MonteCarloEngine
         var workPool = new ConcurrentBag<EpochWork>();
         var accumulators = new ConcurrentDictionary<int, EpochAccumulator>();
         long done = 0;
+        long satelliteTicks = 0;
         int threads = Math.Max(1, options.Threads);
 
         var prepare = new TransformBlock<(int Epoch, int Block), EpochWork>(
             item =>
             {
                 EpochWork w = workPool.TryTake(out var pooled) ? pooled : new EpochWork(scenario.TotalSatellites, setup.LaneCapacity);
+                long prepareStart = StageClock.Now;
                 PrepareEpoch(setup, sampler, item.Epoch, item.Block, w);
+                satelliteTicks += StageClock.Now - prepareStart; // one epoch at a time: no race
                 w.Accumulator = accumulators.GetOrAdd(item.Epoch, _ => new EpochAccumulator(accuracy, setup.Blocks * setup.Tiles.Count));
                 w.PendingTiles = setup.Tiles.Count;
                 return w;
@@ -73,6 +76,7 @@ public static class MonteCarloEngine
                 TileScratch scratch = scratchPool.TryTake(out var s) ? s : new TileScratch(scenario.TotalSatellites, setup.LaneCapacity, accuracy, batches)
                 {
                     Integrity = integrity?.CreateScratch(setup),
+                    Stages = options.MeasureStages ? new StageClock() : null,
                 };
                 foreach (EpochWork work in job.Batch)
                 {
@@ -150,6 +154,7 @@ public static class MonteCarloEngine
         {
             Integrity = integrity is null ? null : IntegrityAssembly.Build(setup, integrity, cells, scratches, cellResults),
             Intervals = batches < 2 ? null : BatchIntervalAssembly.Build(scratches, batches),
+            Stages = options.MeasureStages ? Stages(scratches, satelliteTicks) : null,
             Relativity = relativity,
             // Clock grades (issue 3): the grade's model vs simulated ADEV, and the sampler's age-of-data statistics.
             Clocks = MeasureClockGrade(scenario, setup),
@@ -162,6 +167,18 @@ public static class MonteCarloEngine
         scenario.Clock.Grade is { } grade
             ? SimulatedAllanDeviation.Measure(grade, GradedClockModel.CreateSimulator(scenario), setup.Seed, setup.Epochs)
             : [];
+
+    private static StageTimes Stages(IEnumerable<TileScratch> scratches, long satelliteTicks)
+    {
+        var sum = new StageClock();
+        foreach (var s in scratches)
+        {
+            sum.Add(s.Stages!);
+        }
+
+        double f = 1.0 / Stopwatch.Frequency;
+        return new StageTimes(satelliteTicks * f, sum.Geometry * f, sum.UserNormals * f, sum.Projection * f, sum.Sketches * f, sum.Integrity * f);
+    }
 
     /// <summary>SHA-256 of the scenario text, lower-case hex: the identity of a scenario in every output.</summary>
     public static string HashOf(string text) =>

@@ -30,4 +30,7 @@ public sealed record RunOptions
 
     /// <summary>Tool version recorded in the metadata.</summary>
     public string ToolVersion { get; init; } = "0.0.0";
+
+    /// <summary>Time each stage of the kernel (RunResult.Stages); for the benchmark, costs a few per cent.</summary>
+    public bool MeasureStages { get; init; }
 }

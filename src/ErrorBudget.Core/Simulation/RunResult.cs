@@ -26,6 +26,9 @@ public sealed record RunResult(
 
     /// <summary>Batch-means confidence intervals of the global percentiles; null with fewer than 2 batches.</summary>
     public BatchIntervals? Intervals { get; init; }
+
+    /// <summary>Thread time per stage when RunOptions.MeasureStages was on; otherwise null.</summary>
+    public StageTimes? Stages { get; init; }
 }
 
 /// <summary>Provenance of a run, written into every table's key-value metadata and the summary.</summary>

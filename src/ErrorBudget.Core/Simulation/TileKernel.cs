@@ -89,6 +89,8 @@ internal sealed class TileKernel
 
     private void ProcessUser(EpochWork work, GridCell cell, CellAccumulator acc, long weight, TileScratch s)
     {
+        StageClock? clock = s.Stages;
+        long t0 = clock is null ? 0 : StageClock.Now;
         int m = SelectVisible(work, cell, s);
         if (work.IsFirstBlock)
         {
@@ -104,6 +106,11 @@ internal sealed class TileKernel
             {
                 acc.UnavailableEpochs++;
                 s.UnavailableWeight += weight;
+            }
+
+            if (clock is not null)
+            {
+                clock.Geometry += StageClock.Now - t0;
             }
 
             return;
@@ -137,27 +144,44 @@ internal sealed class TileKernel
 
         int trials = work.BlockTrials;
         int lanes = (trials + SimulationSetup.NormalBatch - 1) / SimulationSetup.NormalBatch * SimulationSetup.NormalBatch;
+        long geometryEnd = clock is null ? 0 : StageClock.Now;
+        long normalsEnd = geometryEnd;
+        long sketchesBefore = clock?.Sketches ?? 0;
         if (_araim)
         {
             AraimTrialSampler.Sample(m, work, cell.Index, _seed, acc, weight, s);
         }
-        else if (_simd && TrialSampler.VectorPathAvailable)
-        {
-            FillUserNormals(_seed, work.Epoch, cell.Index, work.FirstTrial, lanes, s);
-            TrialSampler.SampleVector(m, trials, work.SatelliteErrors, acc, weight, s);
-        }
         else
         {
-            FillUserNormals(_seed, work.Epoch, cell.Index, work.FirstTrial, trials, s);
-            TrialSampler.SampleScalar(m, trials, work.SatelliteErrors, acc, weight, s);
+            bool vector = _simd && TrialSampler.VectorPathAvailable;
+            FillUserNormals(_seed, work.Epoch, cell.Index, work.FirstTrial, vector ? lanes : trials, s);
+            normalsEnd = clock is null ? 0 : StageClock.Now;
+            if (vector)
+            {
+                TrialSampler.SampleVector(m, trials, work.SatelliteErrors, acc, weight, s);
+            }
+            else
+            {
+                TrialSampler.SampleScalar(m, trials, work.SatelliteErrors, acc, weight, s);
+            }
         }
 
+        long samplingEnd = clock is null ? 0 : StageClock.Now;
         acc.Samples += trials;
         s.Samples += trials;
         if (_integrity is not null)
         {
             _integrity.Tally(acc.Integrity!, s.Integrity!, trials, hpl, vpl, available, _araim ? s.Integrity!.Flagged.AsSpan(0, trials) : []);
             _integrity.SampleOverbound(m, work, cell.Index, s, s.Integrity!, s.IntegrityVariance);
+        }
+
+        if (clock is not null)
+        {
+            clock.Geometry += geometryEnd - t0;
+            clock.UserNormals += normalsEnd - geometryEnd;
+            // The sketch inserts inside the sampler are timed apart (TrialSampler.AddAll).
+            clock.Projection += samplingEnd - normalsEnd - (clock.Sketches - sketchesBefore);
+            clock.Integrity += StageClock.Now - samplingEnd;
         }
     }
 

@@ -87,6 +87,9 @@ internal sealed class TileScratch
     public int SegmentCount;
     public int FirstSegmentBatch;
 
+    /// <summary>Stage timing (benchmark only); null when not measuring.</summary>
+    public StageClock? Stages { get; set; }
+
     /// <summary>Integrity buffers and shares; null without [integrity].</summary>
     public IntegrityScratch? Integrity { get; set; }
 

@@ -96,6 +96,16 @@ internal static class TrialSampler
     /// <summary>The block's keys into the cell's sketches (weight 1) and the epoch share (area weight); padded lanes are left out.</summary>
     internal static void AddAll(CellAccumulator acc, long weight, TileScratch s, int trials)
     {
+        long start = s.Stages is null ? 0 : StageClock.Now;
+        AddKeys(acc, weight, s, trials);
+        if (s.Stages is { } clock)
+        {
+            clock.Sketches += StageClock.Now - start;
+        }
+    }
+
+    private static void AddKeys(CellAccumulator acc, long weight, TileScratch s, int trials)
+    {
         ReadOnlySpan<int> h = s.KeysH.AsSpan(0, trials);
         ReadOnlySpan<int> v = s.KeysV.AsSpan(0, trials);
         if (s.Batches == 1)
