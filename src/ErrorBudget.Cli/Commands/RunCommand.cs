@@ -18,9 +18,13 @@ internal static class RunCommand
         var threads = CommonOptions.Threads();
         var force = new Option<bool>("--force", "-f") { Description = "Replace an existing result-set folder." };
         var quiet = CommonOptions.Quiet();
-        var command = new Command("run", "Run the scenario and write its result set (cells, epochs, relativity, clocks and age_of_data Parquet tables, summary.json).")
+        var exact = new Option<bool>("--exact")
         {
-            scenario, output, trials, seed, threads, force, quiet,
+            Description = "Compute the HPE/VPE percentiles exactly from the Gaussian position-error distributions instead of sampling (zero-mean Gaussian budgets only: no faults, graded clocks, upload jitter, relativistic biases or [integrity]).",
+        };
+        var command = new Command("run", "Run the scenario and write its result set (cells, epochs, relativity, clocks, age_of_data, availability, integrity and overbound Parquet tables, summary.json).")
+        {
+            scenario, output, trials, seed, threads, force, quiet, exact,
         };
 
         command.SetAction(async (pr, ct) => (int)await ExecuteAsync(
@@ -32,12 +36,13 @@ internal static class RunCommand
             pr.GetValue(threads),
             pr.GetValue(force),
             pr.GetValue(quiet),
+            pr.GetValue(exact),
             ct).ConfigureAwait(false));
         return command;
     }
 
     private static async Task<ExitCode> ExecuteAsync(
-        CliContext context, FileInfo file, DirectoryInfo outDir, int? trials, long? seed, int threads, bool force, bool quiet, CancellationToken ct)
+        CliContext context, FileInfo file, DirectoryInfo outDir, int? trials, long? seed, int threads, bool force, bool quiet, bool exact, CancellationToken ct)
     {
         if (CommonOptions.Validate(trials, seed, threads) is string bad)
         {
@@ -51,6 +56,12 @@ internal static class RunCommand
             return ExitCode.BadInput;
         }
 
+        if (exact && Core.Exact.ExactEligibility.WhyNot(scenario) is string why)
+        {
+            await context.Error.WriteLineAsync($"error: --exact cannot run {file.Name}: {why}").ConfigureAwait(false);
+            return ExitCode.BadInput;
+        }
+
         if (outDir.Exists && !force)
         {
             await context.Error.WriteLineAsync(
@@ -61,8 +72,10 @@ internal static class RunCommand
         try
         {
             var options = new RunOptions { Threads = threads, ToolVersion = CliApp.ToolVersion };
-            RunResult result = await ProgressDisplay.RunAsync(
-                context, quiet, "simulating", progress => MonteCarloEngine.RunAsync(scenario, options with { Progress = progress }, ct)).ConfigureAwait(false);
+            RunResult result = exact
+                ? await ProgressDisplay.RunAsync(context, quiet, "exact percentiles", _ => Core.Exact.ExactEngine.RunAsync(scenario, options, ct)).ConfigureAwait(false)
+                : await ProgressDisplay.RunAsync(
+                    context, quiet, "simulating", progress => MonteCarloEngine.RunAsync(scenario, options with { Progress = progress }, ct)).ConfigureAwait(false);
             await ResultSetWriter.WriteAsync(result, outDir.FullName, force, ct).ConfigureAwait(false);
             await RunReport.WriteAsync(context.Output, result, outDir.FullName).ConfigureAwait(false);
             return ExitCode.Done;

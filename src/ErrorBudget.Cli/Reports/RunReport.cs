@@ -13,7 +13,9 @@ internal static class RunReport
         var s = r.Scenario;
         var c = CultureInfo.InvariantCulture;
         await w.WriteLineAsync(string.Create(c, $"scenario   {s.SourceName} (sha256 {r.Metadata.ScenarioHash[..12]}), seed {r.Metadata.Seed}, {r.Metadata.Trials} trials")).ConfigureAwait(false);
-        await w.WriteLineAsync(string.Create(c, $"simulated  {r.Cells.Count} cells x {r.Epochs.Count} epochs x {r.Metadata.Trials} trials = {g.Samples:N0} position samples in {r.Metadata.RunSeconds:0.0} s on {r.Metadata.Threads} threads")).ConfigureAwait(false);
+        await w.WriteLineAsync(r.Exact
+            ? string.Create(c, $"exact      {r.Cells.Count} cells x {r.Epochs.Count} epochs: percentiles of the Gaussian position-error mixtures (no sampling) in {r.Metadata.RunSeconds:0.0} s on {r.Metadata.Threads} threads")
+            : string.Create(c, $"simulated  {r.Cells.Count} cells x {r.Epochs.Count} epochs x {r.Metadata.Trials} trials = {g.Samples:N0} position samples in {r.Metadata.RunSeconds:0.0} s on {r.Metadata.Threads} threads")).ConfigureAwait(false);
         await w.WriteLineAsync(string.Create(c, $"unavailable {g.UnavailableFraction * 100:0.###} % of the area-weighted user-epochs (fewer than 4 satellites)")).ConfigureAwait(false);
         await w.WriteLineAsync("service area (area-weighted, pooled)   p50       p95       p99       p99.9").ConfigureAwait(false);
         await w.WriteLineAsync(Row("  HPE (m)", g.Hpe)).ConfigureAwait(false);

@@ -45,7 +45,11 @@ internal static class BatchIntervalAssembly
             }
 
             BatchMeansEstimate e = BatchMeansInterval.Compute(estimates, BatchIntervals.Confidence);
-            result[k] = new PercentileInterval(level, e.Mean, e.Lower, e.Upper);
+            // Each batch estimate is a sketch bucket's value, within the sketch's relative accuracy alpha of
+            // the batch's exact percentile; batches often share a bucket, which alone would give a zero
+            // spread. The interval is widened by alpha on each side to cover that quantisation.
+            double alpha = SimulationSetup.SketchAccuracy;
+            result[k] = new PercentileInterval(level, e.Mean, e.Lower * (1 - alpha), e.Upper * (1 + alpha));
         }
 
         return result;

@@ -3,7 +3,8 @@ namespace ErrorBudget.Core.Simulation;
 /// <summary>
 /// 95 % batch-means confidence intervals of the global HPE and VPE percentiles: the trials split into
 /// <see cref="Batches"/> independent batches, each batch's pooled percentile an estimate, Student t
-/// with Batches - 1 degrees of freedom on their spread.
+/// with Batches - 1 degrees of freedom on their spread, widened by the sketch's relative accuracy
+/// (0.5 %) on each side because each batch estimate is a sketch bucket's value.
 /// </summary>
 public sealed record BatchIntervals(int Batches, IReadOnlyList<PercentileInterval> Hpe, IReadOnlyList<PercentileInterval> Vpe)
 {

@@ -27,6 +27,9 @@ public sealed record RunResult(
     /// <summary>Batch-means confidence intervals of the global percentiles; null with fewer than 2 batches.</summary>
     public BatchIntervals? Intervals { get; init; }
 
+    /// <summary>True for the exact path (Gaussian mixture quantiles, no sampling): see Exact.ExactEngine.</summary>
+    public bool Exact { get; init; }
+
     /// <summary>Thread time per stage when RunOptions.MeasureStages was on; otherwise null.</summary>
     public StageTimes? Stages { get; init; }
 }

@@ -74,6 +74,7 @@ public class SummaryJsonTests
           "scenario_hash": "3f2a9c0d4b5e6f708192a3b4c5d6e7f8091a2b3c4d5e6f708192a3b4c5d6e7f8",
           "seed": 9007199254740993,
           "trials": 3,
+          "method": "monte-carlo",
           "threads": 2,
           "started_utc": "2031-06-01T12:34:56Z",
           "run_seconds": 12.345678901234567,

@@ -1,0 +1,190 @@
+using System.Diagnostics;
+using ErrorBudget.Core.Grid;
+using ErrorBudget.Core.Scenarios;
+using ErrorBudget.Core.Simulation;
+using ErrorBudget.Core.Statistics;
+
+namespace ErrorBudget.Core.Exact;
+
+/// <summary>
+/// The exact path for zero-mean Gaussian budgets (issue 6): the position error of every (epoch, user)
+/// is a known Gaussian, so the per-cell, per-epoch and service-area percentiles of HPE and VPE are
+/// quantiles of known mixtures (equal weights over a cell's epochs; integer area weights over cells),
+/// found by root finding on the mixture CDF, with no sampling noise. Refused (see
+/// <see cref="ExactEligibility"/>) for budgets that need sampling.
+/// </summary>
+public static class ExactEngine
+{
+    public static Task<RunResult> RunAsync(Scenario scenario, RunOptions options, CancellationToken ct)
+    {
+        ArgumentNullException.ThrowIfNull(scenario);
+        ArgumentNullException.ThrowIfNull(options);
+        if (ExactEligibility.WhyNot(scenario) is string why)
+        {
+            throw new InvalidOperationException(why);
+        }
+
+        return Task.Run(() => Run(scenario, options, ct), ct);
+    }
+
+    private static RunResult Run(Scenario scenario, RunOptions options, CancellationToken ct)
+    {
+        var started = DateTimeOffset.UtcNow;
+        var clock = Stopwatch.StartNew();
+        int threads = Math.Max(1, options.Threads);
+        var grid = ServiceGrid.From(scenario.Grid);
+        var c = ExactComponents.Build(scenario, grid, threads, ct);
+        var weights = AreaWeights.For(grid, (long)scenario.Run.Epochs * scenario.Run.Trials).Integer;
+        int epochs = c.Epochs;
+        long trials = scenario.Run.Trials;
+
+        var cells = new CellResult[c.Cells];
+        Parallel.For(0, c.Cells, new ParallelOptions { MaxDegreeOfParallelism = threads, CancellationToken = ct }, i =>
+        {
+            var members = Enumerable.Range(i * epochs, epochs).ToArray();
+            cells[i] = CellRow(scenario, grid.Cells[i], c, members, trials);
+        });
+
+        var epochRows = new EpochResult[epochs];
+        Parallel.For(0, epochs, new ParallelOptions { MaxDegreeOfParallelism = threads, CancellationToken = ct }, e =>
+        {
+            var members = Enumerable.Range(0, c.Cells).Select(cell => (cell * epochs) + e).ToArray();
+            var w = Enumerable.Range(0, c.Cells).Select(cell => (double)weights[cell]).ToArray();
+            epochRows[e] = EpochRow(scenario, e, c, members, w, trials);
+        });
+
+        var all = Enumerable.Range(0, c.Cells * epochs).ToArray();
+        var allWeights = all.Select(k => (double)weights[k / epochs]).ToArray();
+        var global = Global(grid, c, cells, all, allWeights, trials, threads);
+        clock.Stop();
+        var metadata = new RunMetadata(
+            MonteCarloEngine.HashOf(scenario.SourceText), scenario.Run.Seed, scenario.Run.Trials, options.ToolVersion, threads, started, clock.Elapsed.TotalSeconds);
+        return new RunResult(scenario, metadata, cells, epochRows, global)
+        {
+            Relativity = Relativity.RelativityAnalysis.Build(scenario, ct),
+            Exact = true,
+        };
+    }
+
+    private static CellResult CellRow(Scenario scenario, GridCell g, ExactComponents c, int[] members, long trials)
+    {
+        var solved = members.Where(k => !double.IsNaN(c.SigmaUp[k])).ToArray();
+        var pdop = new DDSketch(SimulationSetup.SketchAccuracy);
+        var hdop = new DDSketch(SimulationSetup.SketchAccuracy);
+        var vdop = new DDSketch(SimulationSetup.SketchAccuracy);
+        foreach (int k in solved)
+        {
+            pdop.Add(c.Pdop[k]);
+            hdop.Add(c.Hdop[k]);
+            vdop.Add(c.Vdop[k]);
+        }
+
+        double satsMean = members.Average(k => (double)c.SatsInView[k]);
+        var (hpe, vpe) = Percentiles(c, solved, null);
+        return new CellResult(
+            g.Index, g.LatDeg, g.LonDeg, g.AreaWeight, solved.Length * trials,
+            members.Length == 0 ? double.NaN : 1.0 - ((double)solved.Length / members.Length),
+            satsMean,
+            PercentileReport.Percentile(pdop, solved.Length, 0.50),
+            PercentileReport.Percentile(pdop, solved.Length, 0.95),
+            PercentileReport.Percentile(hdop, solved.Length, 0.95),
+            PercentileReport.Percentile(vdop, solved.Length, 0.95),
+            hpe,
+            vpe);
+    }
+
+    private static EpochResult EpochRow(Scenario scenario, int e, ExactComponents c, int[] members, double[] weights, long trials)
+    {
+        double total = weights.Sum();
+        var solvedIndex = Enumerable.Range(0, members.Length).Where(j => !double.IsNaN(c.SigmaUp[members[j]])).ToArray();
+        double unavailable = members.Select((k, j) => double.IsNaN(c.SigmaUp[k]) ? weights[j] : 0).Sum() / total;
+        double sats = members.Select((k, j) => c.SatsInView[k] * weights[j]).Sum() / total;
+        var pdop = new DDSketch(SimulationSetup.SketchAccuracy);
+        foreach (int j in solvedIndex)
+        {
+            pdop.Add(c.Pdop[members[j]], (long)weights[j]);
+        }
+
+        var (hpe, vpe) = Percentiles(c, [.. solvedIndex.Select(j => members[j])], [.. solvedIndex.Select(j => weights[j])]);
+        double t = scenario.Run.EpochTimeSeconds(e);
+        return new EpochResult(e, t, scenario.Run.StartUtc.AddSeconds(t), solvedIndex.Length * trials, unavailable, sats,
+            pdop.IsEmpty ? double.NaN : pdop.Quantile(0.50), pdop.IsEmpty ? double.NaN : pdop.Quantile(0.95), hpe, vpe);
+    }
+
+    private static GlobalFigures Global(ServiceGrid grid, ExactComponents c, CellResult[] cells, int[] all, double[] weights, long trials, int threads)
+    {
+        var solved = Enumerable.Range(0, all.Length).Where(j => !double.IsNaN(c.SigmaUp[all[j]])).ToArray();
+        var members = solved.Select(j => all[j]).ToArray();
+        var w = solved.Select(j => weights[j]).ToArray();
+        var (hpe, vpe) = Percentiles(c, members, w, threads);
+        double unavailable = 0;
+        for (int i = 0; i < cells.Length; i++)
+        {
+            unavailable += grid.Cells[i].AreaWeight * (double.IsNaN(cells[i].UnavailableFraction) ? 1.0 : cells[i].UnavailableFraction);
+        }
+
+        CellResult? worstH = cells.Where(r => !double.IsNaN(r.Hpe.P95)).MaxBy(r => r.Hpe.P95);
+        CellResult? worstV = cells.Where(r => !double.IsNaN(r.Vpe.P95)).MaxBy(r => r.Vpe.P95);
+        return new GlobalFigures(
+            members.Length * trials, unavailable, hpe, vpe,
+            worstH is null ? new WorstCell(-1, double.NaN, double.NaN, double.NaN) : new WorstCell(worstH.CellIndex, worstH.LatDeg, worstH.LonDeg, worstH.Hpe.P95),
+            worstV is null ? new WorstCell(-1, double.NaN, double.NaN, double.NaN) : new WorstCell(worstV.CellIndex, worstV.LatDeg, worstV.LonDeg, worstV.Vpe.P95));
+    }
+
+    /// <summary>HPE and VPE percentiles of the mixture of the given components (weights null: equal).</summary>
+    private static (PercentileSet Hpe, PercentileSet Vpe) Percentiles(ExactComponents c, int[] members, double[]? weights, int threads = 1)
+    {
+        if (members.Length == 0)
+        {
+            return (PercentileSet.Empty, PercentileSet.Empty);
+        }
+
+        double total = weights?.Sum() ?? members.Length;
+        var nodes = members.Select(k => GaussianPositionError.NodesFor(c.Lambda1[k], c.Lambda2[k])).ToArray();
+        double Weighted(Func<int, double> f)
+        {
+            if (threads <= 1 || members.Length < 4096)
+            {
+                double sum = 0;
+                for (int j = 0; j < members.Length; j++)
+                {
+                    sum += (weights?[j] ?? 1.0) * f(j);
+                }
+
+                return sum / total;
+            }
+
+            // A fixed split and a fixed order of the partial sums: the same answer for any scheduling.
+            int parts = threads * 4;
+            var partial = new double[parts];
+            Parallel.For(0, parts, new ParallelOptions { MaxDegreeOfParallelism = threads }, p =>
+            {
+                double sum = 0;
+                for (int j = p * members.Length / parts; j < (p + 1) * members.Length / parts; j++)
+                {
+                    sum += (weights?[j] ?? 1.0) * f(j);
+                }
+
+                partial[p] = sum;
+            });
+            return partial.Sum() / total;
+        }
+
+        double minL2 = members.Min(k => c.Lambda2[k]), maxL1 = members.Max(k => c.Lambda1[k]);
+        double minU = members.Min(k => c.SigmaUp[k]), maxU = members.Max(k => c.SigmaUp[k]);
+        var h = new double[PercentileSet.Levels.Length];
+        var v = new double[PercentileSet.Levels.Length];
+        for (int q = 0; q < h.Length; q++)
+        {
+            double p = PercentileSet.Levels[q];
+            double rayleigh = MixtureQuantile.Rayleigh(p);
+            h[q] = MixtureQuantile.Solve(
+                r => Weighted(j => GaussianPositionError.HorizontalCdf(r, c.Lambda1[members[j]], c.Lambda2[members[j]], nodes[j])),
+                p, Math.Sqrt(minL2) * rayleigh, Math.Sqrt(maxL1) * rayleigh);
+            double half = MixtureQuantile.HalfNormal(p);
+            v[q] = MixtureQuantile.Solve(r => Weighted(j => GaussianPositionError.VerticalCdf(r, c.SigmaUp[members[j]])), p, minU * half, maxU * half);
+        }
+
+        return (new PercentileSet(h[0], h[1], h[2], h[3]), new PercentileSet(v[0], v[1], v[2], v[3]));
+    }
+}
