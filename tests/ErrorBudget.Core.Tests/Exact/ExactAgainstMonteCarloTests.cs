@@ -1,0 +1,85 @@
+using ErrorBudget.Core.Exact;
+using ErrorBudget.Core.Scenarios;
+using ErrorBudget.Core.Simulation;
+using Xunit.Abstractions;
+
+namespace ErrorBudget.Core.Tests.Exact;
+
+/// <summary>
+/// Issue 6: the exact path is an independent check of the Monte Carlo path. Global percentiles must
+/// agree within the Monte Carlo tolerance: 3 batch-means standard errors (the batch interval's half
+/// width / t_0.975,9 = 2.262, standard t table) plus the sketch's relative accuracy 0.5 %. Per cell
+/// (28,800 samples on W1), the p95s agree to a few per cent in all but a handful of cells and
+/// without a systematic offset.
+/// </summary>
+public sealed class ExactAgainstMonteCarloTests(ITestOutputHelper output)
+{
+    private const double T975Nine = 2.262;
+
+    private static Scenario Load(string name, int? trials = null)
+    {
+        var s = ScenarioLoader.LoadFile(Path.Combine(ScenarioFolder(), name));
+        return trials is int n ? s with { Run = s.Run with { Trials = n } } : s;
+    }
+
+    private static string ScenarioFolder()
+    {
+        var dir = new DirectoryInfo(AppContext.BaseDirectory);
+        while (dir is not null && !Directory.Exists(Path.Combine(dir.FullName, "scenarios")))
+        {
+            dir = dir.Parent;
+        }
+
+        return Path.Combine(dir!.FullName, "scenarios");
+    }
+
+    [Theory]
+    [InlineData("w1.toml", 100)]
+    [InlineData("demo.toml", 200)]
+    public async Task Exact_and_sampled_percentiles_agree_within_the_monte_carlo_tolerance(string file, int trials)
+    {
+        var scenario = Load(file, trials);
+        Assert.Null(ExactEligibility.WhyNot(scenario));
+        var options = new RunOptions { Threads = 2 };
+        RunResult mc = await MonteCarloEngine.RunAsync(scenario, options, CancellationToken.None);
+        RunResult exact = await ExactEngine.RunAsync(scenario, options, CancellationToken.None);
+
+        var ci = mc.Intervals!;
+        for (int k = 0; k < 3; k++) // p50, p95, p99 (p99.9 has too few samples per batch for a tight test)
+        {
+            Check("HPE", k, Pick(mc.Global.Hpe, k), Pick(exact.Global.Hpe, k), ci.Hpe[k]);
+            Check("VPE", k, Pick(mc.Global.Vpe, k), Pick(exact.Global.Vpe, k), ci.Vpe[k]);
+        }
+
+        // Per cell: relative differences of p95 (Monte Carlo noise ~1 % per cell here, sketch 0.5 %).
+        var rel = mc.Cells.Zip(exact.Cells, (m, e) => (m.Vpe.P95 - e.Vpe.P95) / e.Vpe.P95).Where(double.IsFinite).ToArray();
+        double mean = rel.Average();
+        double within = rel.Count(d => Math.Abs(d) <= 0.05) / (double)rel.Length;
+        output.WriteLine($"{file}: per-cell VPE p95 relative difference mean {mean:P3}, share within 5 % {within:P2}");
+        // No systematic offset beyond the sketch accuracy (0.5 %) plus the epochs' shared satellite errors (~0.25 %).
+        Assert.True(Math.Abs(mean) <= 0.0075, $"mean relative difference {mean}");
+        Assert.True(within >= 0.99, $"{within} of cells within 5 %");
+    }
+
+    private void Check(string what, int k, double sampled, double exact, PercentileInterval interval)
+    {
+        // The interval already includes the sketch accuracy on each side; its half width / t is the standard error.
+        double se = (interval.Upper - interval.Lower) / 2 / T975Nine;
+        double tolerance = (3 * se) + (0.005 * exact);
+        output.WriteLine($"{what} p{PercentileSet.Levels[k] * 100}: sampled {sampled:F4}, exact {exact:F4}, tolerance {tolerance:F4}");
+        Assert.True(Math.Abs(sampled - exact) <= tolerance, $"{what} level {PercentileSet.Levels[k]}: {sampled} vs {exact} (tolerance {tolerance})");
+    }
+
+    private static double Pick(PercentileSet p, int k) => k switch { 0 => p.P50, 1 => p.P95, 2 => p.P99, _ => p.P999 };
+
+    [Fact]
+    public void Scenarios_that_need_sampling_are_refused_with_the_reason()
+    {
+        var faults = Load("integrity-faults.toml");
+        Assert.Contains("[faults]", ExactEligibility.WhyNot(faults));
+        var clocks = Load("clocks-demo.toml");
+        Assert.Contains("clock.grade", ExactEligibility.WhyNot(clocks));
+        var relativity = Load("relativity-two-shells.toml");
+        Assert.Contains("[relativity]", ExactEligibility.WhyNot(relativity));
+    }
+}

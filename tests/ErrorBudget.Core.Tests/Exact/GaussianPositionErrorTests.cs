@@ -1,0 +1,75 @@
+using ErrorBudget.Core.Exact;
+using ErrorBudget.Core.Random;
+using MathNet.Numerics.Distributions;
+
+namespace ErrorBudget.Core.Tests.Exact;
+
+public class GaussianPositionErrorTests
+{
+    [Theory]
+    [InlineData(0.3)]
+    [InlineData(1.0)]
+    [InlineData(2.5)]
+    public void Equal_eigenvalues_give_the_Rayleigh_distribution(double r)
+    {
+        // P(R <= r) = 1 - exp(-r^2 / (2 sigma^2)) for a circular Gaussian (Rayleigh; common practice).
+        double expected = 1 - Math.Exp(-r * r / (2 * 1.7));
+        Assert.Equal(expected, GaussianPositionError.HorizontalCdf(r, 1.7, 1.7, 8), 13);
+    }
+
+    [Theory]
+    [InlineData(1.0, 0.6)]
+    [InlineData(4.0, 0.5)]
+    [InlineData(30.0, 1.0)]
+    [InlineData(200.0, 0.7)]
+    [InlineData(1000.0, 1.0)]
+    public void The_chosen_node_count_matches_a_4096_node_reference_to_1e_9(double lambda1, double lambda2)
+    {
+        int nodes = GaussianPositionError.NodesFor(lambda1, lambda2);
+        foreach (double scale in new[] { 0.1, 0.5, 1, 2, 4 })
+        {
+            double r = scale * Math.Sqrt(lambda1);
+            double reference = GaussianPositionError.HorizontalCdf(r, lambda1, lambda2, 4096);
+            Assert.True(Math.Abs(GaussianPositionError.HorizontalCdf(r, lambda1, lambda2, nodes) - reference) <= 1e-9, $"r {r}: {nodes} nodes");
+        }
+    }
+
+    [Fact]
+    public void The_horizontal_cdf_matches_sampled_elliptical_gaussians()
+    {
+        // 4e5 samples of (sqrt(l1) z1, sqrt(l2) z2): the empirical CDF at each r is within 4.5 binomial
+        // standard deviations sqrt(F (1 - F) / n) of the formula.
+        const int N = 400_000;
+        double l1 = 3.0, l2 = 0.4;
+        var z = new double[2 * N];
+        CounterRng.FillNormals(CounterRng.Key(12, RandomPurpose.Spare, 1, 2, 3), 0, z);
+        foreach (double r in new[] { 0.5, 1.0, 2.0, 3.5, 5.0 })
+        {
+            long inside = 0;
+            for (int i = 0; i < N; i++)
+            {
+                double e = Math.Sqrt(l1) * z[2 * i], n = Math.Sqrt(l2) * z[(2 * i) + 1];
+                inside += (e * e) + (n * n) <= r * r ? 1 : 0;
+            }
+
+            double f = GaussianPositionError.HorizontalCdf(r, l1, l2, GaussianPositionError.NodesFor(l1, l2));
+            double sd = Math.Sqrt(f * (1 - f) / N);
+            Assert.True(Math.Abs(((double)inside / N) - f) <= (4.5 * sd) + 1e-12, $"r {r}: {(double)inside / N} vs {f}");
+        }
+    }
+
+    [Fact]
+    public void The_vertical_cdf_is_the_half_normal()
+    {
+        // P(|U| <= 1.96 sigma) = 0.95 (standard normal table; MathNet Normal.CDF).
+        Assert.Equal(2 * Normal.CDF(0, 1, 1.96) - 1, GaussianPositionError.VerticalCdf(1.96 * 2.5, 2.5), 12);
+    }
+
+    [Fact]
+    public void Eigenvalues_of_a_two_by_two_covariance_are_its_principal_variances()
+    {
+        var (l1, l2) = GaussianPositionError.Eigenvalues(2.0, 1.0, 2.0); // [[2,1],[1,2]]: eigenvalues 3 and 1
+        Assert.Equal(3.0, l1, 12);
+        Assert.Equal(1.0, l2, 12);
+    }
+}
