@@ -118,12 +118,14 @@ public sealed partial class DDSketch
         long needLo = first ? lo : Math.Min(lo, oldLo);
         long needHi = first ? hi : Math.Max(hi, oldHi);
         long needed = needHi - needLo + 1;
-        long length = Math.Max(needed, Math.Max(2L * counts.Length, InitialBuckets));
+        // Grow by a quarter of what is needed, not by doubling: a grid of many cells holds one store per
+        // cell and sketch, and doubling left them ~2.7x larger than their key range (issue 6, memory).
+        // Growth is still geometric, so the copies stay amortised O(1) per key.
+        long length = Math.Max(needed + (needed / 4), Math.Max(counts.Length + (counts.Length / 4), InitialBuckets));
         long slack = length - needed;
 
         // Spare room: three quarters on the side that grew (growth tends to continue that way), a
-        // quarter on the other (tails grow both ways). Keeps the store within ~2.7x the key range
-        // seen for one-sided and for alternating growth.
+        // quarter on the other (tails grow both ways).
         long newOffset = first ? needLo - slack / 2
             : lo < oldLo ? needLo - (3 * slack / 4)
             : needLo - slack / 4;

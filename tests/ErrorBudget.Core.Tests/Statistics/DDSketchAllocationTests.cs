@@ -29,11 +29,12 @@ public class DDSketchAllocationTests
     }
 
     [Fact]
-    public void The_store_grows_by_doubling_only_when_the_range_grows()
+    public void The_store_grows_geometrically_only_when_the_range_grows()
     {
-        // Amortised doubling: reaching 6000 keys in steps of one key needs O(log n) allocations,
-        // and the store stays within three times the key range (plus the initial 64 buckets; the
-        // documented bound of the growth policy).
+        // Geometric growth by a quarter: reaching 6000 keys in steps of one key needs O(log n)
+        // allocations (log_1.25(6000 / 64) = 20 per side at most), and the store stays within
+        // 1.25^2 of the key range (the new length is 1.25 x the larger of the needed range and the
+        // old length; plus the initial 64 buckets: the documented bound of the growth policy).
         var sketch = new DDSketch(0.005);
         int previous = 0, growths = 0;
         for (int key = 0; key < 3000; key++)
@@ -47,8 +48,8 @@ public class DDSketchAllocationTests
             }
         }
 
-        Assert.InRange(growths, 1, 12);
-        Assert.InRange(sketch.AllocatedBuckets, 5999, 3 * 5999 + 64);
+        Assert.InRange(growths, 1, 42);
+        Assert.InRange(sketch.AllocatedBuckets, 5999, (1.5625 * 5999) + 64);
         Assert.Equal(2, sketch.CountOf(0)); // added as +0 and -0
         Assert.Equal(1, sketch.CountOf(17));
         Assert.Equal(1, sketch.CountOf(-2999));
