@@ -26,12 +26,16 @@ internal static class BenchCommand
         var trials = CommonOptions.Trials();
         var json = new Option<bool>("--json") { Description = "Print one JSON object (for build servers) instead of text." };
         var quiet = CommonOptions.Quiet();
+        var gridStep = new Option<double?>("--grid-step-deg")
+        {
+            Description = "Grid variant of W1: cell size in degrees (1: the 1-degree grid, 64,800 users); the extra timed runs then use a quarter of the trials.",
+        };
         var command = new Command("bench", "Run the fixed benchmark workload W1 and report throughput and peak memory.")
         {
-            threads, trials, json, quiet,
+            threads, trials, json, quiet, gridStep,
         };
         command.SetAction(async (pr, ct) => (int)await ExecuteAsync(
-            context, pr.GetValue(threads), pr.GetValue(trials), pr.GetValue(json), pr.GetValue(quiet), ct).ConfigureAwait(false));
+            context, pr.GetValue(threads), pr.GetValue(trials), pr.GetValue(json), pr.GetValue(quiet), pr.GetValue(gridStep), ct).ConfigureAwait(false));
         return command;
     }
 
@@ -43,7 +47,7 @@ internal static class BenchCommand
         return ScenarioLoader.Load(reader.ReadToEnd(), "w1.toml");
     }
 
-    private static async Task<ExitCode> ExecuteAsync(CliContext context, int threads, int? trials, bool json, bool quiet, CancellationToken ct)
+    private static async Task<ExitCode> ExecuteAsync(CliContext context, int threads, int? trials, bool json, bool quiet, double? gridStep, CancellationToken ct)
     {
         if (CommonOptions.Validate(trials, null, threads) is string bad)
         {
@@ -51,7 +55,19 @@ internal static class BenchCommand
             return ExitCode.BadInput;
         }
 
+        if (gridStep is double step && !(step >= 0.25 && step <= 30))
+        {
+            await context.Error.WriteLineAsync(string.Create(CultureInfo.InvariantCulture, $"error: --grid-step-deg {step} is out of range; allowed: 0.25 <= --grid-step-deg <= 30")).ConfigureAwait(false);
+            return ExitCode.BadInput;
+        }
+
         var scenario = LoadWorkload();
+        string workload = WorkloadName;
+        if (gridStep is double cell)
+        {
+            scenario = scenario with { Grid = scenario.Grid with { LatStepDeg = cell, LonStepDeg = cell } };
+            workload = string.Create(CultureInfo.InvariantCulture, $"{WorkloadName}-grid-{cell}deg");
+        }
         if (trials is int n)
         {
             scenario = scenario with { Run = scenario.Run with { Trials = n } };
@@ -74,17 +90,19 @@ internal static class BenchCommand
             // Issue 6: where the time goes (a second run with stage timers, which cost a few per cent) and the
             // parallel efficiency (a one-thread run: rate with N threads / (N x rate with one)).
             clock.Restart();
-            RunResult staged = await MonteCarloEngine.RunAsync(scenario, options with { MeasureStages = true }, ct).ConfigureAwait(false);
+            // A grid variant is large: its extra runs take a quarter of the trials.
+            Scenario extra = gridStep is null ? scenario : scenario with { Run = scenario.Run with { Trials = Math.Max(1, scenario.Run.Trials / 4) } };
+            RunResult staged = await MonteCarloEngine.RunAsync(extra, options with { MeasureStages = true }, ct).ConfigureAwait(false);
             double stagedSeconds = clock.Elapsed.TotalSeconds;
             double efficiency = double.NaN;
             if (threads > 1)
             {
                 // Both warm (the first run above also pays for compiling the kernel).
                 clock.Restart();
-                await MonteCarloEngine.RunAsync(scenario, options, ct).ConfigureAwait(false);
+                await MonteCarloEngine.RunAsync(extra, options, ct).ConfigureAwait(false);
                 double warm = clock.Elapsed.TotalSeconds;
                 clock.Restart();
-                await MonteCarloEngine.RunAsync(scenario, options with { Threads = 1 }, ct).ConfigureAwait(false);
+                await MonteCarloEngine.RunAsync(extra, options with { Threads = 1 }, ct).ConfigureAwait(false);
                 efficiency = clock.Elapsed.TotalSeconds / warm / threads;
             }
 
@@ -94,7 +112,7 @@ internal static class BenchCommand
             long users = result.Cells.Count;
             long solutions = users * result.Epochs.Count * result.Metadata.Trials;
             var figures = new BenchFigures(
-                WorkloadName, users, result.Epochs.Count, result.Metadata.Trials, solutions, solutions / simulate,
+                workload, users, result.Epochs.Count, result.Metadata.Trials, solutions, solutions / simulate,
                 simulate, write, peakMemory, threads, Environment.ProcessorCount, CliApp.ToolVersion,
                 araimEvaluate, araimTest, efficiency, BenchStages.From(staged.Stages!, stagedSeconds, write));
             if (json)
