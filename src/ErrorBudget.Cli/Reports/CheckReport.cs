@@ -15,12 +15,13 @@ internal static class CheckReport
 {
     /// <summary>
     /// Throughput used for the time estimate, user-solutions per second per thread: a conservative
-    /// figure below what `errorbudget bench` measured on the reference machine (see README).
+    /// figure below what `errorbudget bench` measured on the reference machine (17 M/s on one thread
+    /// for W1 on 2026-12-01, see README).
     /// </summary>
-    public const double SolutionsPerSecondPerThread = 5e6;
+    public const double SolutionsPerSecondPerThread = 8e6;
 
     /// <summary>How much slower a run with ARAIM protection levels is per user-solution (integrity-faults.toml vs integrity-demo.toml).</summary>
-    public const double AraimSlowdown = 15.0;
+    public const double AraimSlowdown = 25.0;
 
     /// <summary>Visibility is sampled on at most this many user-epochs, so check stays quick.</summary>
     private const int VisibilitySampleBudget = 200_000;
@@ -55,7 +56,7 @@ internal static class CheckReport
         var (min, mean, max, under4) = Visibility(s, constellation, grid, ct);
         await w.WriteLineAsync(string.Create(c, $"satellites in view (sampled): min {min}, mean {mean:0.0}, max {max}; user-epochs with fewer than 4: {under4 * 100:0.##} %")).ConfigureAwait(false);
         await w.WriteLineAsync(string.Create(c, $"samples: {grid.Count} users x {epochs} epochs x {s.Run.Trials} trials = {solutions:N0} user-solutions")).ConfigureAwait(false);
-        // ARAIM draws every satellite's range per trial and runs the monitor: measured about 15x slower per solution.
+        // ARAIM draws every satellite's range per trial and runs the monitor: measured about 20-25x slower per solution than W1.
         double perThread = s.Integrity?.Method == ProtectionLevelMethod.Araim ? SolutionsPerSecondPerThread / AraimSlowdown : SolutionsPerSecondPerThread;
         double seconds = solutions / (perThread * Math.Max(1, threads));
         await w.WriteLineAsync(string.Create(c, $"estimate: about {FormatSeconds(seconds)} on {threads} threads, about {EstimateMemoryMiB(s, grid.Count, threads):N0} MiB of memory")).ConfigureAwait(false);
