@@ -35,7 +35,17 @@ public static class CliApp
             return (int)ExitCode.BadInput;
         }
 
-        var config = new InvocationConfiguration { Output = output, Error = error };
-        return await parse.InvokeAsync(config, ct).ConfigureAwait(false);
+        // Expected failures are handled in the commands; anything else is a defect: one line on stderr
+        // (no stack trace for the user), exit 1, and nothing written (result sets are atomic).
+        var config = new InvocationConfiguration { Output = output, Error = error, EnableDefaultExceptionHandler = false };
+        try
+        {
+            return await parse.InvokeAsync(config, ct).ConfigureAwait(false);
+        }
+        catch (Exception ex) when (ex is not OperationCanceledException)
+        {
+            await error.WriteLineAsync($"failure: internal error ({ex.GetType().Name}): {ex.Message}; please report it with the scenario file").ConfigureAwait(false);
+            return (int)ExitCode.Failure;
+        }
     }
 }
