@@ -52,6 +52,7 @@ public sealed class CheckAndBenchTests
 
         Assert.True(stages.GetProperty("geometry").GetDouble() > 0);
         Assert.InRange(root.GetProperty("parallel_efficiency").GetDouble(), 0.05, 1.5);
+        Assert.True(root.GetProperty("warm_user_solutions_per_second").GetDouble() > 0);
         Assert.True(root.GetProperty("araim_evaluate_us_per_user_epoch").GetDouble() > 0);
         Assert.True(root.GetProperty("araim_test_us_per_trial").GetDouble() > 0);
     }

@@ -95,12 +95,14 @@ internal static class BenchCommand
             RunResult staged = await MonteCarloEngine.RunAsync(extra, options with { MeasureStages = true }, ct).ConfigureAwait(false);
             double stagedSeconds = clock.Elapsed.TotalSeconds;
             double efficiency = double.NaN;
+            double warmRate = double.NaN;
             if (threads > 1)
             {
                 // Both warm (the first run above also pays for compiling the kernel).
                 clock.Restart();
-                await MonteCarloEngine.RunAsync(extra, options, ct).ConfigureAwait(false);
+                RunResult warmRun = await MonteCarloEngine.RunAsync(extra, options, ct).ConfigureAwait(false);
                 double warm = clock.Elapsed.TotalSeconds;
+                warmRate = (double)warmRun.Cells.Count * warmRun.Epochs.Count * warmRun.Metadata.Trials / warm;
                 clock.Restart();
                 await MonteCarloEngine.RunAsync(extra, options with { Threads = 1 }, ct).ConfigureAwait(false);
                 efficiency = clock.Elapsed.TotalSeconds / warm / threads;
@@ -114,7 +116,7 @@ internal static class BenchCommand
             var figures = new BenchFigures(
                 workload, users, result.Epochs.Count, result.Metadata.Trials, solutions, solutions / simulate,
                 simulate, write, peakMemory, threads, Environment.ProcessorCount, CliApp.ToolVersion,
-                araimEvaluate, araimTest, efficiency, BenchStages.From(staged.Stages!, stagedSeconds, write));
+                araimEvaluate, araimTest, efficiency, warmRate, BenchStages.From(staged.Stages!, stagedSeconds, write));
             if (json)
             {
                 await context.Output.WriteLineAsync(JsonSerializer.Serialize(figures, BenchJson.Default.BenchFigures)).ConfigureAwait(false);
@@ -135,7 +137,7 @@ internal static class BenchCommand
 
     private static Task WriteTextAsync(TextWriter w, BenchFigures f) => w.WriteLineAsync(string.Create(CultureInfo.InvariantCulture, $"""
         workload                 {f.Workload}: {f.Users} users x {f.Epochs} epochs x {f.Trials} trials = {f.UserSolutions:N0} user-solutions
-        user-solutions per second {f.UserSolutionsPerSecond / 1e6:0.0} M ({f.Threads} threads on {f.ProcessorCount} cores)
+        user-solutions per second {f.UserSolutionsPerSecond / 1e6:0.0} M ({f.Threads} threads on {f.ProcessorCount} cores; first run, including compilation and first-touch memory); a warm run {f.WarmUserSolutionsPerSecond / 1e6:0.0} M
         simulation               {f.SimulationSeconds:0.00} s
         writing the result set   {f.WriteSeconds:0.00} s
         peak memory              {f.PeakMemoryBytes / 1048576.0:0} MiB

@@ -19,6 +19,7 @@ internal sealed record BenchFigures(
     [property: JsonPropertyName("araim_evaluate_us_per_user_epoch")] double AraimEvaluateMicroseconds,
     [property: JsonPropertyName("araim_test_us_per_trial")] double AraimTestMicroseconds,
     [property: JsonPropertyName("parallel_efficiency")] double ParallelEfficiency,
+    [property: JsonPropertyName("warm_user_solutions_per_second")] double WarmUserSolutionsPerSecond,
     [property: JsonPropertyName("stage_seconds")] BenchStages Stages);
 
 /// <summary>Thread seconds per stage of the timed run (summed over workers), and the writing time.</summary>
