@@ -14,12 +14,13 @@ internal static class GaussianPositionError
         sigma > 0 ? SpecialFunctions.Erf(x / (sigma * Math.Sqrt(2.0))) : (x >= 0 ? 1.0 : 0.0);
 
     /// <summary>
-    /// P(|(E, N)| &lt;= r) for covariance eigenvalues lambda1 &gt;= lambda2 &gt; 0. In polar coordinates the
-    /// Gaussian density integrates over the radius in closed form, leaving
-    /// P(R &gt; r) = 1 / (2 pi sqrt(lambda1 lambda2)) Int_0^2pi exp(-r^2 q(t) / 2) / q(t) dt,
-    /// q(t) = cos^2 t / lambda1 + sin^2 t / lambda2 (derived here; it reduces to the Rayleigh
-    /// exp(-r^2 / (2 lambda)) when lambda1 = lambda2). The integrand is smooth and periodic, so the
-    /// midpoint rule converges geometrically; <paramref name="nodes"/> points over a quarter period.
+    /// P(|(E, N)| &lt;= r) for covariance eigenvalues lambda1 &gt;= lambda2 &gt;= 0. In polar coordinates the
+    /// Gaussian density integrates over the radius in closed form; with the angle taken along the ellipse
+    /// (tan t = sqrt(lambda2 / lambda1) tan phi) what is left is
+    /// P(R &gt; r) = (2 / pi) Int_0^(pi/2) exp(-r^2 / (2 s^2(phi))) d phi, s^2 = lambda1 cos^2 phi + lambda2 sin^2 phi
+    /// (derived here; it reduces to the Rayleigh exp(-r^2 / (2 lambda)) when lambda1 = lambda2, and to the
+    /// half-normal of a line when lambda2 = 0). The integrand is smooth and bounded for every eccentricity,
+    /// so the midpoint rule with <paramref name="nodes"/> points converges fast.
     /// </summary>
     public static double HorizontalCdf(double r, double lambda1, double lambda2, int nodes)
     {
@@ -28,17 +29,49 @@ internal static class GaussianPositionError
             return 0.0;
         }
 
-        double a = 1.0 / lambda1, b = 1.0 / lambda2, half = -0.5 * r * r, sum = 0.0;
-        double step = Math.PI / 2 / nodes;
+        if (nodes == LineNodes)
+        {
+            return ElongatedCdf(r, lambda1, lambda2);
+        }
+
+        double half = -0.5 * r * r, sum = 0.0;
         double[] sin2 = SineSquares(nodes);
         for (int k = 0; k < sin2.Length; k++)
         {
-            double q = a + ((b - a) * sin2[k]);
-            sum += Math.Exp(half * q) / q;
+            double s2 = lambda1 + ((lambda2 - lambda1) * sin2[k]);
+            sum += Math.Exp(half / s2);
         }
 
-        double tail = sum * step * 4.0 / (2.0 * Math.PI * Math.Sqrt(lambda1 * lambda2));
-        return Math.Clamp(1.0 - tail, 0.0, 1.0);
+        return Math.Clamp(1.0 - (sum / nodes), 0.0, 1.0);
+    }
+
+    /// <summary>Marks a very elongated ellipse (ratio &gt;= 100): <see cref="ElongatedCdf"/> takes it.</summary>
+    public const int LineNodes = -1;
+
+    private static readonly MathNet.Numerics.Integration.GaussLegendreRule QuarterTurn = new(0.0, Math.PI / 2, 128);
+
+    /// <summary>
+    /// The same probability for a very elongated ellipse, where the angular form above concentrates in
+    /// a band of width r / sqrt(lambda1): conditioning on the long axis, X = r sin t,
+    /// P = 2 Int_0^(pi/2) phi(r sin t / sqrt(lambda1)) / sqrt(lambda1) erf(r cos t / sqrt(2 lambda2)) r cos t dt,
+    /// smooth except within lambda2 / r of t = pi/2, where the weight r cos t is already small
+    /// (128-point Gauss-Legendre).
+    /// </summary>
+    private static double ElongatedCdf(double r, double lambda1, double lambda2)
+    {
+        double sigma1 = Math.Sqrt(lambda1);
+        double inverseShort = lambda2 > 0 ? 1.0 / Math.Sqrt(2.0 * lambda2) : double.PositiveInfinity;
+        double sum = 0.0;
+        for (int k = 0; k < QuarterTurn.Order; k++)
+        {
+            double t = QuarterTurn.Abscissas[k];
+            double x = r * Math.Sin(t) / sigma1;
+            double c = r * Math.Cos(t);
+            double inner = double.IsPositiveInfinity(inverseShort) ? 1.0 : SpecialFunctions.Erf(c * inverseShort);
+            sum += QuarterTurn.Weights[k] * Math.Exp(-0.5 * x * x) * inner * c;
+        }
+
+        return Math.Clamp(2.0 * sum / (sigma1 * Math.Sqrt(2.0 * Math.PI)), 0.0, 1.0);
     }
 
     private static readonly System.Collections.Concurrent.ConcurrentDictionary<int, double[]> Tables = new();
@@ -56,11 +89,14 @@ internal static class GaussianPositionError
         return table;
     });
 
-    /// <summary>Midpoint nodes for an eigenvalue ratio: enough for 1e-10 in the CDF (tested against a 4096-node reference).</summary>
+    /// <summary>
+    /// Midpoint nodes for an eigenvalue ratio (1e-9 in the CDF), or <see cref="LineNodes"/> for the
+    /// elongated form at ratios of 100 and more (1e-7): tested against fine references up to ratio 1e8.
+    /// </summary>
     public static int NodesFor(double lambda1, double lambda2)
     {
-        double ratio = lambda1 / lambda2;
-        return ratio < 2 ? 8 : ratio < 10 ? 16 : ratio < 50 ? 32 : ratio < 400 ? 96 : 256;
+        double ratio = lambda1 / Math.Max(lambda2, lambda1 * 1e-300);
+        return ratio < 2 ? 8 : ratio < 10 ? 16 : ratio < 100 ? 32 : LineNodes;
     }
 
     /// <summary>Eigenvalues (lambda1 &gt;= lambda2) of the 2 x 2 symmetric [[ee, en], [en, nn]].</summary>

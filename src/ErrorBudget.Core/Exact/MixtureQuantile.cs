@@ -11,6 +11,9 @@ internal static class MixtureQuantile
     /// <summary>Relative accuracy of the root, well inside the sketch's 0.5 %.</summary>
     public const double RelativeAccuracy = 1e-7;
 
+    /// <summary>Stopping accuracy handed to Brent (it bounds |F(x) - level| and half the x step).</summary>
+    public const double FunctionAccuracy = 1e-12;
+
     public static double Solve(Func<double, double> mixtureCdf, double level, double lower, double upper)
     {
         if (!(upper > 0) || !double.IsFinite(upper))
@@ -23,7 +26,10 @@ internal static class MixtureQuantile
             return 0.5 * (lower + upper);
         }
 
-        return Brent.FindRoot(x => mixtureCdf(x) - level, lower, upper, RelativeAccuracy * upper, 200);
+        // MathNet's Brent also stops as soon as |f| < accuracy, and f is a probability here: the accuracy
+        // must be far below the smallest tail probability (1e-3 at p99.9), or a wide bracket ends early
+        // (found when the mixture p99.9 of a near-singular geometry came out twice the sampled one).
+        return Brent.FindRoot(x => mixtureCdf(x) - level, lower, upper, FunctionAccuracy, 400);
     }
 
     /// <summary>Quantile of the standard half-normal, sigma = 1: Phi^-1((1 + p) / 2).</summary>
