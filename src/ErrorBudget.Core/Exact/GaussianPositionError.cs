@@ -48,14 +48,14 @@ internal static class GaussianPositionError
     /// <summary>Marks a very elongated ellipse (ratio &gt;= 100): <see cref="ElongatedCdf"/> takes it.</summary>
     public const int LineNodes = -1;
 
-    private static readonly MathNet.Numerics.Integration.GaussLegendreRule QuarterTurn = new(0.0, Math.PI / 2, 128);
+    private static readonly MathNet.Numerics.Integration.GaussLegendreRule QuarterTurn = new(0.0, Math.PI / 2, 64);
 
     /// <summary>
     /// The same probability for a very elongated ellipse, where the angular form above concentrates in
     /// a band of width r / sqrt(lambda1): conditioning on the long axis, X = r sin t,
     /// P = 2 Int_0^(pi/2) phi(r sin t / sqrt(lambda1)) / sqrt(lambda1) erf(r cos t / sqrt(2 lambda2)) r cos t dt,
     /// smooth except within lambda2 / r of t = pi/2, where the weight r cos t is already small
-    /// (128-point Gauss-Legendre).
+    /// (64-point Gauss-Legendre).
     /// </summary>
     private static double ElongatedCdf(double r, double lambda1, double lambda2)
     {

@@ -76,11 +76,16 @@ public sealed class ExactAgainstMonteCarloTests(ITestOutputHelper output)
     public async Task A_cell_with_near_singular_epochs_keeps_its_tail_percentiles()
     {
         // A 40 deg mask over W1 leaves epochs with exactly four satellites and VDOP in the thousands:
-        // one such epoch dominates the cell's p99.9. With 1.06e6 samples about 1,060 lie beyond it,
-        // a relative standard error near 1.5 %; 5 % allows 3 of them plus the sketch's 0.5 %.
+        // one such epoch dominates the cell's p99.9. With some 5e5 samples about 500 lie beyond it,
+        // a relative standard error near 2 %; 5 % allows 2.5 of them plus the sketch's 0.5 %.
         // (Regression: a root-finding tolerance on the CDF once put the exact p99.9 74 % too high.)
         var w1 = Load("w1.toml", 20_000);
-        var scenario = w1 with { Grid = w1.Grid with { LatMinDeg = 75, LatMaxDeg = 80, LonMinDeg = -40, LonMaxDeg = -35, MaskDeg = 40 } };
+        // The first 10 h hold the worst epoch (epoch 109, VDOP 3,312); fewer epochs keep the test short.
+        var scenario = w1 with
+        {
+            Grid = w1.Grid with { LatMinDeg = 75, LatMaxDeg = 80, LonMinDeg = -40, LonMaxDeg = -35, MaskDeg = 40 },
+            Run = w1.Run with { DurationSeconds = 10 * 3600.0 },
+        };
         var options = new RunOptions { Threads = 2 };
         var mc = (await MonteCarloEngine.RunAsync(scenario, options, CancellationToken.None)).Cells[0];
         var exact = (await ExactEngine.RunAsync(scenario, options, CancellationToken.None)).Cells[0];
