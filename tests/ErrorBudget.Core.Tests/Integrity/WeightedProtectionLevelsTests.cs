@@ -22,8 +22,8 @@ public class WeightedProtectionLevelsTests
         // d_major = √(8/3) = 1.632993 m; HPL = 6.0 · 1.632993 = 9.797959 m; VPL = 5.33 · √(16/3) = 5.33 · 2.309401 = 12.309108 m.
         var los = new[]
         {
-            IntegrityFixtures.LineOfSight(0, 90), IntegrityFixtures.LineOfSight(0, 0),
-            IntegrityFixtures.LineOfSight(120, 0), IntegrityFixtures.LineOfSight(240, 0),
+            Geometry.GeometryFixtures.LineOfSight(0, 90), Geometry.GeometryFixtures.LineOfSight(0, 0),
+            Geometry.GeometryFixtures.LineOfSight(120, 0), Geometry.GeometryFixtures.LineOfSight(240, 0),
         };
         double[] d = IntegrityFixtures.Covariance(los, [0.25, 0.25, 0.25, 0.25]);
 
@@ -47,7 +47,7 @@ public class WeightedProtectionLevelsTests
 
         // Independent: D = (GᵀWG)⁻¹ by MathNet's general inverse; d_major² = largest eigenvalue of the E/N block
         // (the semi-major axis of the 1-σ ellipse, an eigen-decomposition rather than the closed form).
-        var g = IntegrityFixtures.GeometryMatrix(los);
+        var g = Geometry.GeometryFixtures.GeometryMatrix(los);
         var w = Matrix<double>.Build.DenseOfDiagonalArray(weights);
         var d = (g.Transpose() * w * g).Inverse();
         double dE2 = d[0, 0], dN2 = d[1, 1], dEN = d[0, 1], dU2 = d[2, 2];
@@ -76,8 +76,8 @@ public class WeightedProtectionLevelsTests
         var rng = new System.Random(2024);
         for (int trial = 0; trial < 300; trial++)
         {
-            var los = IntegrityFixtures.RandomSky(rng, rng.Next(5, 12));
-            double[] d = IntegrityFixtures.Covariance(los, IntegrityFixtures.RandomWeights(rng, los.Length));
+            var los = Geometry.GeometryFixtures.RandomSky(rng, rng.Next(5, 12));
+            double[] d = IntegrityFixtures.Covariance(los, Geometry.GeometryFixtures.RandomWeights(rng, los.Length));
             double major = WeightedProtectionLevels.SemiMajorAxisMeters(d);
             double larger = Math.Sqrt(Math.Max(d[0], d[5]));
             Assert.True(major >= larger * (1 - RelativeTolerance), $"d_major {major} < max(d_E, d_N) {larger}");
@@ -103,8 +103,8 @@ public class WeightedProtectionLevelsTests
         const double k = 2.7;
         const double RelativeTolerance = 1e-12;
         var rng = new System.Random(17);
-        var los = IntegrityFixtures.RandomSky(rng, 8);
-        var weights = IntegrityFixtures.RandomWeights(rng, 8);
+        var los = Geometry.GeometryFixtures.RandomSky(rng, 8);
+        var weights = Geometry.GeometryFixtures.RandomWeights(rng, 8);
         var a = WeightedProtectionLevels.Compute(IntegrityFixtures.Covariance(los, weights), 6.0, 5.33);
         var b = WeightedProtectionLevels.Compute(
             IntegrityFixtures.Covariance(los, weights.Select(x => x / (k * k)).ToArray()), 6.0, 5.33);
