@@ -87,6 +87,18 @@ internal sealed class TileKernel
         }
     }
 
+    /// <summary>
+    /// The geometry of one (epoch, user) exactly as the kernel computes it (visible set, lines of sight,
+    /// assumed weights, truth user-level variances, S and the covariance, in the scratch), for the exact
+    /// path. False when the epoch has no solution; <paramref name="m"/> is the satellites in view.
+    /// </summary>
+    internal bool TrySolveGeometry(EpochWork work, GridCell cell, TileScratch s, out int m, out Dop dop)
+    {
+        m = SelectVisible(work, cell, s);
+        dop = default;
+        return m >= PositionSolution.MinSatellites && Solve(m, s, out dop);
+    }
+
     private void ProcessUser(EpochWork work, GridCell cell, CellAccumulator acc, long weight, TileScratch s)
     {
         StageClock? clock = s.Stages;
