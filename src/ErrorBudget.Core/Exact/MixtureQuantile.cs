@@ -24,7 +24,7 @@ internal static class MixtureQuantile
             return 0.5 * (lower + upper);
         }
 
-        // Illinois (modified false position, Dowell & Jarratt 1971; common practice): keeps a bracket, so the
+        // Illinois (modified false position, Dowell & Jarratt, BIT 11, 1971, from memory; common practice): keeps a bracket, so the
         // stopping rule is on x alone (bracket width <= RelativeAccuracy x upper end). MathNet's Brent was
         // tried first: it also stops once |F(x) - level| is below its accuracy, which for a wide bracket put
         // the p99.9 of near-singular geometries 74 % too high.
