@@ -24,10 +24,12 @@ internal static class AraimTrialSampler
         int trials = work.BlockTrials;
         int stride = s.LaneCapacity;
         double[] err = work.SatelliteErrors;
+        Span<double> sigma = stackalloc double[m];
         for (int i = 0; i < m; i++)
         {
             ulong key = CounterRng.Key(seed, RandomPurpose.UserLocal, work.Epoch, user, SatelliteStreamOffset + s.Visible[i]);
             CounterRng.FillNormals(key, (ulong)work.FirstTrial, x.SatelliteNormals.AsSpan(i * stride, trials));
+            sigma[i] = Math.Sqrt(s.TruthVariance[i]); // once per (epoch, user), not per trial
         }
 
         Span<double> ranges = x.Ranges.AsSpan(0, m);
@@ -43,7 +45,7 @@ internal static class AraimTrialSampler
                 int b = sat * 4 * stride;
                 var u = s.LineOfSight[i];
                 ranges[i] = err[b + (3 * stride) + j] + (u.X * err[b + j]) + (u.Y * err[b + stride + j]) + (u.Z * err[b + (2 * stride) + j])
-                    + (Math.Sqrt(s.TruthVariance[i]) * x.SatelliteNormals[(i * stride) + j]);
+                    + (sigma[i] * x.SatelliteNormals[(i * stride) + j]);
                 faulted |= work.Faulted[(sat * stride) + j];
             }
 
