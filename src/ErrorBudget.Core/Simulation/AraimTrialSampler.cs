@@ -24,7 +24,7 @@ internal static class AraimTrialSampler
         int trials = work.BlockTrials;
         int stride = s.LaneCapacity;
         double[] err = work.SatelliteErrors;
-        Span<double> sigma = stackalloc double[m];
+        Span<double> sigma = x.Sigma.AsSpan(0, m);
         for (int i = 0; i < m; i++)
         {
             ulong key = CounterRng.Key(seed, RandomPurpose.UserLocal, work.Epoch, user, SatelliteStreamOffset + s.Visible[i]);

@@ -15,6 +15,7 @@ internal sealed class IntegrityScratch
         Flagged = new bool[laneCapacity];
         SatelliteNormals = araim is null ? [] : new double[satellites * laneCapacity];
         Ranges = new double[satellites];
+        Sigma = new double[satellites];
         Constellation = new int[satellites];
         AccuracyVariance = new double[satellites];
         NominalBias = new double[satellites];
@@ -41,6 +42,9 @@ internal sealed class IntegrityScratch
     public Integrity.Araim.AraimSolver? Araim { get; }
     public double[] SatelliteNormals { get; }
     public double[] Ranges { get; }
+
+    /// <summary>ARAIM: each visible satellite's truth user-level sigma for the current (epoch, user).</summary>
+    public double[] Sigma { get; }
     public int[] Constellation { get; }
     public double[] AccuracyVariance { get; }
     public double[] NominalBias { get; }
