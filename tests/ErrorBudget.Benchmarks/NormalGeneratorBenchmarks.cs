@@ -3,11 +3,15 @@ using ErrorBudget.Core.Random;
 
 namespace ErrorBudget.Benchmarks;
 
-/// <summary>The counter-based normal generator: one block of user-level normals (vector and scalar twins).</summary>
+/// <summary>
+/// The counter-based normal generators on one block of normals: the double-precision one (satellite-level
+/// errors, ARAIM) and the single-precision one of the user-level normals, vector and scalar forms.
+/// </summary>
 [MemoryDiagnoser]
 public class NormalGeneratorBenchmarks
 {
     private readonly double[] _buffer = new double[1024];
+    private readonly float[] _single = new float[1024];
     private readonly ulong _key = CounterRng.Key(1, RandomPurpose.UserLocal, 2, 3, 4);
 
     [Benchmark(Baseline = true, OperationsPerInvoke = 1024)]
@@ -15,4 +19,16 @@ public class NormalGeneratorBenchmarks
 
     [Benchmark(OperationsPerInvoke = 1024)]
     public void ScalarNormals() => CounterRng.FillNormalsScalar(_key, 0, _buffer);
+
+    [Benchmark(OperationsPerInvoke = 1024)]
+    public void VectorSingleNormals() => SingleNormals.Fill(_key, 0, _single);
+
+    [Benchmark(OperationsPerInvoke = 1024)]
+    public void ScalarSingleNormals()
+    {
+        for (int i = 0; i < _single.Length; i++)
+        {
+            _single[i] = SingleNormals.OfTrial(_key, i);
+        }
+    }
 }

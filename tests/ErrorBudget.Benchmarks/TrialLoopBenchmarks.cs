@@ -15,7 +15,7 @@ public class TrialLoopBenchmarks
     private const int Visible = 9;
     private const int Trials = 100;
     private const int Lanes = 104;
-    private readonly double[] _errors = new double[Satellites * 4 * Lanes];
+    private readonly float[] _errors = new float[Satellites * 4 * Lanes];
     private TileScratch _scratch = null!;
     private CellAccumulator _cell = null!;
 
@@ -24,8 +24,8 @@ public class TrialLoopBenchmarks
     {
         _scratch = new TileScratch(Satellites, Lanes, 0.005);
         _cell = new CellAccumulator(0.005);
-        CounterRng.FillNormals(CounterRng.Key(3, RandomPurpose.Spare, 0, 0, 0), 0, _errors);
-        CounterRng.FillNormals(CounterRng.Key(4, RandomPurpose.Spare, 0, 0, 0), 0, _scratch.Normals);
+        SingleNormals.Fill(CounterRng.Key(3, RandomPurpose.Spare, 0, 0, 0), 0, _errors);
+        SingleNormals.Fill(CounterRng.Key(4, RandomPurpose.Spare, 0, 0, 0), 0, _scratch.Normals);
         for (int i = 0; i < Visible; i++)
         {
             _scratch.Visible[i] = 3 * i;
@@ -43,6 +43,10 @@ public class TrialLoopBenchmarks
         _scratch.Cholesky3[6] = 0.1;
         _scratch.Cholesky3[7] = 0.3;
         _scratch.Cholesky3[8] = 1.7;
+        for (int q = 0; q < 9; q++)
+        {
+            _scratch.CholeskySingle[q] = (float)_scratch.Cholesky3[q];
+        }
         TileKernel.BuildCoefficients(Visible, _scratch);
     }
 

@@ -44,6 +44,24 @@ internal sealed class EpochWork(int satellites, int laneCapacity)
     /// <summary>See <see cref="Errors.SatelliteErrorSampler"/> for the layout.</summary>
     public double[] SatelliteErrors { get; } = new double[satellites * laneCapacity * Errors.SatelliteErrorSampler.Components];
 
+    /// <summary>
+    /// <see cref="SatelliteErrors"/> in single precision for the trial loop (same layout), each trial's
+    /// mean clock error over all satellites removed: see <see cref="FillSingle"/>.
+    /// </summary>
+    public float[] SatelliteErrorsSingle { get; } = new float[satellites * laneCapacity * Errors.SatelliteErrorSampler.Components];
+
+    /// <summary>
+    /// Rounds the block's errors to float after taking out each trial's mean clock error over all
+    /// satellites. A range error common to every satellite changes only the receiver clock (every row
+    /// of S sums to zero), so removing it changes no position error, and what float must carry is then
+    /// the satellites' differences, not a possibly large common part (a missed frequency offset drifts
+    /// the same for a whole shell). Padded lanes are zeroed.
+    /// </summary>
+    public void FillSingle(int laneCapacity, int trials) =>
+        SingleErrors.Convert(SatelliteErrors, SatelliteErrorsSingle, States.Length, laneCapacity, trials, _meanClock);
+
+    private readonly double[] _meanClock = new double[laneCapacity];
+
     /// <summary>With [faults]: true at [satellite * laneCapacity + trial] when an injected fault is active.</summary>
     public bool[] Faulted { get; } = new bool[satellites * laneCapacity];
 }

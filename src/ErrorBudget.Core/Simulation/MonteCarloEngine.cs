@@ -196,6 +196,7 @@ public static class MonteCarloEngine
         setup.Constellation.Propagate(t, setup.StartRotationAngleRad, w.States);
         w.FillPositions();
         sampler.Sample(epoch, t, w.RotationAngleRad, w.States, w.FirstTrial, w.BlockTrials, setup.LaneCapacity, w.SatelliteErrors, w.Faulted);
+        w.FillSingle(setup.LaneCapacity, w.BlockTrials);
     }
 
     private static EpochResult FinishEpoch(SimulationSetup setup, int epoch, EpochAccumulator acc)

@@ -48,12 +48,10 @@ internal sealed class SimulationSetup
     /// <summary>Epochs a tile job covers in a row (cache reuse of the tile's cell sketches).</summary>
     public const int EpochsPerBatch = 8;
 
-    /// <summary>Trials per vector in the kernel (Vector256 of double).</summary>
-    public const int Lanes = 4;
-
     /// <summary>
-    /// Normals the vector generator makes per step (four Box-Muller pairs). Blocks are padded to a
-    /// multiple of it so no user-level normal falls to the generator's slower scalar tail.
+    /// Trials per vector of the kernel (Vector256 of float) and of the user-level normal generator
+    /// (eight Box-Muller halves). Blocks are padded to a multiple of it so no user-level normal falls
+    /// to the generator's slower scalar tail.
     /// </summary>
     public const int NormalBatch = 8;
     public double StartRotationAngleRad { get; }

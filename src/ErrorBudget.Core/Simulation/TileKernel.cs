@@ -83,7 +83,7 @@ internal sealed class TileKernel
         for (int axis = 0; axis < 3; axis++)
         {
             ulong key = CounterRng.Key(seed, RandomPurpose.UserLocal, epoch, user, axis);
-            CounterRng.FillNormals(key, (ulong)firstTrial, s.Normals.AsSpan(axis * s.LaneCapacity, count));
+            SingleNormals.Fill(key, firstTrial, s.Normals.AsSpan(axis * s.LaneCapacity, count));
         }
     }
 
@@ -153,6 +153,15 @@ internal sealed class TileKernel
         PositionSolution.TryCholesky3(s.Covariance3, s.Cholesky3);
         BuildCoefficients(m, s);
         CommonOffset(m, work, cell, s);
+        for (int q = 0; q < 9; q++)
+        {
+            s.CholeskySingle[q] = (float)s.Cholesky3[q];
+        }
+
+        for (int q = 0; q < 3; q++)
+        {
+            s.OffsetSingle[q] = (float)s.CommonOffset[q];
+        }
 
         int trials = work.BlockTrials;
         int lanes = (trials + SimulationSetup.NormalBatch - 1) / SimulationSetup.NormalBatch * SimulationSetup.NormalBatch;
@@ -170,11 +179,11 @@ internal sealed class TileKernel
             normalsEnd = clock is null ? 0 : StageClock.Now;
             if (vector)
             {
-                TrialSampler.SampleVector(m, trials, work.SatelliteErrors, acc, weight, s);
+                TrialSampler.SampleVector(m, trials, work.SatelliteErrorsSingle, acc, weight, s);
             }
             else
             {
-                TrialSampler.SampleScalar(m, trials, work.SatelliteErrors, acc, weight, s);
+                TrialSampler.SampleScalar(m, trials, work.SatelliteErrorsSingle, acc, weight, s);
             }
         }
 
@@ -294,22 +303,23 @@ internal sealed class TileKernel
     /// <summary>
     /// Per visible satellite i, 8 coefficients at [8 i ..]: the ECEF line of sight (u_x, u_y, u_z) that
     /// turns the orbit error into range (eps_i = u . dr + clock), then S_Ei, S_Ni, S_Ui that turn the
-    /// range error into position (2 spare, for aligned loads). 7 multiply-adds per satellite and trial.
+    /// range error into position (2 spare, for aligned loads), rounded to float for the trial loop.
+    /// 7 multiply-adds per satellite and trial.
     /// </summary>
     internal static void BuildCoefficients(int m, TileScratch s)
     {
         double[] p = s.Projection;
-        double[] coef = s.Coefficients;
+        float[] coef = s.Coefficients;
         for (int i = 0; i < m; i++)
         {
             Vec3 u = s.LineOfSight[i];
             int o = i * 8;
-            coef[o] = u.X;
-            coef[o + 1] = u.Y;
-            coef[o + 2] = u.Z;
-            coef[o + 3] = p[i];
-            coef[o + 4] = p[m + i];
-            coef[o + 5] = p[2 * m + i];
+            coef[o] = (float)u.X;
+            coef[o + 1] = (float)u.Y;
+            coef[o + 2] = (float)u.Z;
+            coef[o + 3] = (float)p[i];
+            coef[o + 4] = (float)p[m + i];
+            coef[o + 5] = (float)p[2 * m + i];
         }
     }
 }

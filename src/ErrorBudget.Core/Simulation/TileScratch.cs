@@ -27,8 +27,8 @@ internal sealed class TileScratch
         TruthVariance = new double[satellites];
         IntegrityVariance = new double[satellites];
         Projection = new double[4 * satellites];
-        Coefficients = new double[8 * satellites];
-        Normals = new double[3 * laneCapacity];
+        Coefficients = new float[8 * satellites];
+        Normals = new float[3 * laneCapacity];
         LaneCapacity = laneCapacity;
         KeysH = new int[laneCapacity];
         KeysV = new int[laneCapacity];
@@ -51,16 +51,23 @@ internal sealed class TileScratch
     public double[] Covariance3 { get; } = new double[9];
     public double[] Cholesky3 { get; } = new double[9];
 
+    /// <summary><see cref="Cholesky3"/> rounded to float for the single-precision trial loop.</summary>
+    public float[] CholeskySingle { get; } = new float[9];
+
     /// <summary>
     /// Position error (E, N, U) common to every trial of this (epoch, user): S applied to the user-level
     /// deterministic range biases (e.g. a relativistic term the receiver misses). Zero when there are none.
     /// </summary>
     public double[] CommonOffset { get; } = new double[3];
 
+    /// <summary><see cref="CommonOffset"/> rounded to float for the single-precision trial loop.</summary>
+    public float[] OffsetSingle { get; } = new float[3];
+
     /// <summary>Per visible satellite: line of sight and projection coefficients (see TileKernel.BuildCoefficients).</summary>
-    public double[] Coefficients { get; }
-    /// <summary>User-level standard normals: axis k of trial j at [k * LaneCapacity + j].</summary>
-    public double[] Normals { get; }
+    public float[] Coefficients { get; }
+
+    /// <summary>User-level standard normals (single precision): axis k of trial j at [k * LaneCapacity + j].</summary>
+    public float[] Normals { get; }
 
     public int LaneCapacity { get; }
 

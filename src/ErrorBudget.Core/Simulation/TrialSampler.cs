@@ -1,6 +1,7 @@
 using System.Runtime.CompilerServices;
 using System.Runtime.InteropServices;
 using System.Runtime.Intrinsics;
+using ErrorBudget.Core.Random;
 using ErrorBudget.Core.Statistics;
 
 namespace ErrorBudget.Core.Simulation;
@@ -8,41 +9,53 @@ namespace ErrorBudget.Core.Simulation;
 /// <summary>
 /// The hot loop over the trials of one (epoch, user): position error from the satellite-level
 /// errors through the coefficients, plus the user-level part L z, then HPE and VPE into the
-/// cell's and the epoch's sketches. Two twins give the same answers (a test holds them to it):
-/// <see cref="SampleVector"/> computes four trials per Vector256 (lanes = trials, the padded lanes
-/// of the last vector are computed and discarded), <see cref="SampleScalar"/> one at a time.
+/// cell's and the epoch's sketches. Two twins give identical answers (a test holds them to it):
+/// <see cref="SampleVector"/> computes eight trials per Vector256 of float (lanes = trials, the padded
+/// lanes of the last vector are computed and discarded), <see cref="SampleScalar"/> one at a time
+/// with the same operations.
 /// </summary>
+/// <remarks>
+/// Single precision (issue 6). The inputs are float: satellite errors with each trial's all-satellite
+/// mean clock error removed (<see cref="EpochWork.FillSingle"/>; a common range error moves no
+/// position, since every row of S sums to zero over the satellites), coefficients, L and the normals.
+/// Each of the ~4 m + 6 fused steps rounds to 2^-24 relative, so an error of size x is computed to
+/// about (m + 3) 2^-24 of the sum of its terms' magnitudes: ~1e-6 relative for position errors of the
+/// size of the range errors, a five-thousandth of the sketch's 0.5 % bucket (the float logarithm adds
+/// a few 1e-7 more). A large error that mostly cancels inside S (e.g. one shell kilometres off with
+/// another in view) keeps the absolute error ~1e-6 of its terms: metres to millimetres.
+/// </remarks>
 internal static class TrialSampler
 {
     public static bool VectorPathAvailable => Vector256.IsHardwareAccelerated;
 
+    /// <summary>Trials per vector step.</summary>
+    public const int Lanes = 8;
+
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public static void SampleVector(int m, int trials, double[] satErrors, CellAccumulator acc, long weight, TileScratch s)
+    public static void SampleVector(int m, int trials, float[] satErrors, CellAccumulator acc, long weight, TileScratch s)
     {
         int stride = s.LaneCapacity;
-        ref double err = ref MemoryMarshal.GetArrayDataReference(satErrors);
-        ref double coef = ref MemoryMarshal.GetArrayDataReference(s.Coefficients);
-        ref double z = ref MemoryMarshal.GetArrayDataReference(s.Normals);
+        ref float err = ref MemoryMarshal.GetArrayDataReference(satErrors);
+        ref float coef = ref MemoryMarshal.GetArrayDataReference(s.Coefficients);
+        ref float z = ref MemoryMarshal.GetArrayDataReference(s.Normals);
         ReadOnlySpan<int> visible = s.Visible.AsSpan(0, m);
-        double[] l = s.Cholesky3;
+        float[] l = s.CholeskySingle;
         var l0 = Vector256.Create(l[0]);
         var l3 = Vector256.Create(l[3]);
         var l4 = Vector256.Create(l[4]);
         var l6 = Vector256.Create(l[6]);
         var l7 = Vector256.Create(l[7]);
         var l8 = Vector256.Create(l[8]);
-        var inverseLnGamma = Vector256.Create(acc.Hpe.InverseLnGamma);
-        var minIndexable = Vector256.Create(DDSketch.MinIndexable);
-        Span<int> keysH = s.KeysH;
-        Span<int> keysV = s.KeysV;
-        var e0 = Vector256.Create(s.CommonOffset[0]);
-        var n0 = Vector256.Create(s.CommonOffset[1]);
-        var u0 = Vector256.Create(s.CommonOffset[2]);
+        var inverseLnGamma = Vector256.Create((float)acc.Hpe.InverseLnGamma);
+        var minIndexable = Vector256.Create((float)DDSketch.MinIndexable);
+        ref int keysH = ref MemoryMarshal.GetArrayDataReference(s.KeysH);
+        ref int keysV = ref MemoryMarshal.GetArrayDataReference(s.KeysV);
+        var e0 = Vector256.Create(s.OffsetSingle[0]);
+        var n0 = Vector256.Create(s.OffsetSingle[1]);
+        var u0 = Vector256.Create(s.OffsetSingle[2]);
         IntegrityScratch? values = s.Integrity;
 
-        // One vector (four trials) per step. Two vectors per step with shared broadcasts measured no
-        // faster (A/B in a scratch program, 2026-12-01): the loop is bound by its loads, not latency.
-        for (int j = 0; j < trials; j += Vector256<double>.Count)
+        for (int j = 0; j < trials; j += Lanes)
         {
             var e = e0;
             var n = n0;
@@ -54,7 +67,7 @@ internal static class TrialSampler
                 var x1 = Vector256.LoadUnsafe(ref err, (nuint)(b + stride));
                 var x2 = Vector256.LoadUnsafe(ref err, (nuint)(b + 2 * stride));
                 var x3 = Vector256.LoadUnsafe(ref err, (nuint)(b + 3 * stride));
-                ref double c = ref Unsafe.Add(ref coef, i * 8);
+                ref float c = ref Unsafe.Add(ref coef, i * 8);
                 var range = Vector256.FusedMultiplyAdd(x0, Vector256.Create(c), x3);
                 range = Vector256.FusedMultiplyAdd(x1, Vector256.Create(Unsafe.Add(ref c, 1)), range);
                 range = Vector256.FusedMultiplyAdd(x2, Vector256.Create(Unsafe.Add(ref c, 2)), range);
@@ -63,34 +76,34 @@ internal static class TrialSampler
                 u = Vector256.FusedMultiplyAdd(range, Vector256.Create(Unsafe.Add(ref c, 5)), u);
             }
 
-            Finish(e, n, u, ref z, j, stride, l0, l3, l4, l6, l7, l8, inverseLnGamma, minIndexable, keysH, keysV, values);
+            var z0 = Vector256.LoadUnsafe(ref z, (nuint)j);
+            var z1 = Vector256.LoadUnsafe(ref z, (nuint)(stride + j));
+            var z2 = Vector256.LoadUnsafe(ref z, (nuint)(2 * stride + j));
+            e = Vector256.FusedMultiplyAdd(l0, z0, e);
+            n = Vector256.FusedMultiplyAdd(l3, z0, Vector256.FusedMultiplyAdd(l4, z1, n));
+            u = Vector256.FusedMultiplyAdd(l6, z0, Vector256.FusedMultiplyAdd(l7, z1, Vector256.FusedMultiplyAdd(l8, z2, u)));
+            var hpe = Vector256.Sqrt(Vector256.FusedMultiplyAdd(e, e, n * n));
+            var vpe = Vector256.Abs(u);
+            VectorKeys(hpe, inverseLnGamma, minIndexable).StoreUnsafe(ref keysH, (nuint)j);
+            VectorKeys(vpe, inverseLnGamma, minIndexable).StoreUnsafe(ref keysV, (nuint)j);
+            if (values is not null)
+            {
+                StoreWide(hpe, values.HpeValues, j);
+                StoreWide(vpe, values.VpeValues, j);
+            }
         }
 
         AddAll(acc, weight, s, trials);
     }
 
-    /// <summary>Adds L z to four trials' satellite-level position errors and writes their HPE and VPE sketch keys.</summary>
+    /// <summary>Eight float values into a double buffer at [j ..] (the integrity comparisons run in double).</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static void Finish(
-        Vector256<double> e, Vector256<double> n, Vector256<double> u, ref double z, int j, int stride,
-        Vector256<double> l0, Vector256<double> l3, Vector256<double> l4, Vector256<double> l6, Vector256<double> l7, Vector256<double> l8,
-        Vector256<double> inverseLnGamma, Vector256<double> minIndexable, Span<int> keysH, Span<int> keysV, IntegrityScratch? values)
+    private static void StoreWide(Vector256<float> x, double[] destination, int j)
     {
-        var z0 = Vector256.LoadUnsafe(ref z, (nuint)j);
-        var z1 = Vector256.LoadUnsafe(ref z, (nuint)(stride + j));
-        var z2 = Vector256.LoadUnsafe(ref z, (nuint)(2 * stride + j));
-        e = Vector256.FusedMultiplyAdd(l0, z0, e);
-        n = Vector256.FusedMultiplyAdd(l3, z0, Vector256.FusedMultiplyAdd(l4, z1, n));
-        u = Vector256.FusedMultiplyAdd(l6, z0, Vector256.FusedMultiplyAdd(l7, z1, Vector256.FusedMultiplyAdd(l8, z2, u)));
-        var hpe = Vector256.Sqrt(Vector256.FusedMultiplyAdd(e, e, n * n));
-        var vpe = Vector256.Abs(u);
-        VectorKeys(hpe, inverseLnGamma, minIndexable, keysH.Slice(j, Vector256<double>.Count));
-        VectorKeys(vpe, inverseLnGamma, minIndexable, keysV.Slice(j, Vector256<double>.Count));
-        if (values is not null)
-        {
-            hpe.StoreUnsafe(ref MemoryMarshal.GetArrayDataReference(values.HpeValues), (nuint)j);
-            vpe.StoreUnsafe(ref MemoryMarshal.GetArrayDataReference(values.VpeValues), (nuint)j);
-        }
+        (Vector256<double> lower, Vector256<double> upper) = Vector256.Widen(x);
+        ref double d = ref MemoryMarshal.GetArrayDataReference(destination);
+        lower.StoreUnsafe(ref d, (nuint)j);
+        upper.StoreUnsafe(ref d, (nuint)(j + 4));
     }
 
     /// <summary>The block's keys into the cell's sketches (weight 1) and the epoch share (area weight); padded lanes are left out.</summary>
@@ -120,53 +133,56 @@ internal static class TrialSampler
         DDSketch.AddKeysSegmented(v, acc.Vpe, 1, s.Vpe, weight, ends, s.VpeRun.AsSpan(s.FirstSegmentBatch, s.SegmentCount));
     }
 
-    /// <summary>Sketch keys ceil(ln x / ln gamma) of four values, the zero key at or below MinIndexable.</summary>
+    /// <summary>
+    /// Sketch keys ceil(ln x / ln gamma) of eight values, the zero key at or below MinIndexable. The
+    /// float logarithm is within a few ulps, so a value closer than ~1e-5 of a bucket width to a bucket
+    /// edge may fall in the neighbour: its estimate stays within alpha (1 + 1e-5) of it.
+    /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static void VectorKeys(Vector256<double> x, Vector256<double> inverseLnGamma, Vector256<double> minIndexable, Span<int> keys)
+    private static Vector256<int> VectorKeys(Vector256<float> x, Vector256<float> inverseLnGamma, Vector256<float> minIndexable)
     {
         var positive = Vector256.GreaterThan(x, minIndexable);
-        var safe = Vector256.ConditionalSelect(positive, x, Vector256<double>.One);
-        var k = Vector256.ConvertToInt64(Vector256.Ceiling(Random.FastMath256.LogOfPositive(safe) * inverseLnGamma));
-        k = Vector256.ConditionalSelect(positive.AsInt64(), k, Vector256.Create((long)DDSketch.ZeroKey));
-        // Keys fit in 32 bits (|ln x| / ln gamma < 2^31 for every double): narrowing keeps them exactly.
-        Vector256.Narrow(k, k).GetLower().StoreUnsafe(ref MemoryMarshal.GetReference(keys));
+        var safe = Vector256.ConditionalSelect(positive, x, Vector256<float>.One);
+        var k = Vector256.ConvertToInt32(Vector256.Ceiling(FastMathSingle.Log(safe) * inverseLnGamma));
+        return Vector256.ConditionalSelect(positive.AsInt32(), k, Vector256.Create(DDSketch.ZeroKey));
     }
 
+    /// <summary>The scalar twin of <see cref="VectorKeys"/> (identical keys).</summary>
+    private static int ScalarKey(float x, float inverseLnGamma) =>
+        x > (float)DDSketch.MinIndexable ? (int)MathF.Ceiling(FastMathSingle.Log(x) * inverseLnGamma) : DDSketch.ZeroKey;
+
     /// <summary>The scalar twin of <see cref="SampleVector"/>: the same fused operations, one trial at a time.</summary>
-    public static void SampleScalar(int m, int trials, double[] satErrors, CellAccumulator acc, long weight, TileScratch s)
+    public static void SampleScalar(int m, int trials, float[] satErrors, CellAccumulator acc, long weight, TileScratch s)
     {
         int stride = s.LaneCapacity;
-        ReadOnlySpan<double> coef = s.Coefficients.AsSpan(0, 8 * m);
+        ReadOnlySpan<float> coef = s.Coefficients.AsSpan(0, 8 * m);
         ReadOnlySpan<int> visible = s.Visible.AsSpan(0, m);
-        ReadOnlySpan<double> l = s.Cholesky3;
-        ReadOnlySpan<double> z = s.Normals;
-        DDSketch mapping = acc.Hpe;
-        double e0 = s.CommonOffset[0], n0 = s.CommonOffset[1], u0 = s.CommonOffset[2];
+        ReadOnlySpan<float> l = s.CholeskySingle;
+        ReadOnlySpan<float> z = s.Normals;
+        float inverseLnGamma = (float)acc.Hpe.InverseLnGamma;
+        float e0 = s.OffsetSingle[0], n0 = s.OffsetSingle[1], u0 = s.OffsetSingle[2];
         for (int j = 0; j < trials; j++)
         {
-            double e = e0, n = n0, u = u0;
+            float e = e0, n = n0, u = u0;
             for (int i = 0; i < m; i++)
             {
                 int b = visible[i] * 4 * stride + j;
-                double x0 = satErrors[b], x1 = satErrors[b + stride], x2 = satErrors[b + 2 * stride], x3 = satErrors[b + 3 * stride];
+                float x0 = satErrors[b], x1 = satErrors[b + stride], x2 = satErrors[b + 2 * stride], x3 = satErrors[b + 3 * stride];
                 int c = i * 8;
-                double range = Math.FusedMultiplyAdd(x2, coef[c + 2], Math.FusedMultiplyAdd(x1, coef[c + 1], Math.FusedMultiplyAdd(x0, coef[c], x3)));
-                e = Math.FusedMultiplyAdd(range, coef[c + 3], e);
-                n = Math.FusedMultiplyAdd(range, coef[c + 4], n);
-                u = Math.FusedMultiplyAdd(range, coef[c + 5], u);
+                float range = MathF.FusedMultiplyAdd(x2, coef[c + 2], MathF.FusedMultiplyAdd(x1, coef[c + 1], MathF.FusedMultiplyAdd(x0, coef[c], x3)));
+                e = MathF.FusedMultiplyAdd(range, coef[c + 3], e);
+                n = MathF.FusedMultiplyAdd(range, coef[c + 4], n);
+                u = MathF.FusedMultiplyAdd(range, coef[c + 5], u);
             }
 
-            double z0 = z[j], z1 = z[stride + j], z2 = z[2 * stride + j];
-            e = Math.FusedMultiplyAdd(l[0], z0, e);
-            n = Math.FusedMultiplyAdd(l[3], z0, Math.FusedMultiplyAdd(l[4], z1, n));
-            u = Math.FusedMultiplyAdd(l[6], z0, Math.FusedMultiplyAdd(l[7], z1, Math.FusedMultiplyAdd(l[8], z2, u)));
-
-            // The same operations in the same order as the vector twin: identical values, only the
-            // logarithm of the sketch key may differ in the last bits (FastMath256 vs Math.Log).
-            double hpe = Math.Sqrt(Math.FusedMultiplyAdd(e, e, n * n));
-            double vpe = Math.Abs(u);
-            s.KeysH[j] = mapping.KeyOf(hpe);
-            s.KeysV[j] = mapping.KeyOf(vpe);
+            float z0 = z[j], z1 = z[stride + j], z2 = z[2 * stride + j];
+            e = MathF.FusedMultiplyAdd(l[0], z0, e);
+            n = MathF.FusedMultiplyAdd(l[3], z0, MathF.FusedMultiplyAdd(l[4], z1, n));
+            u = MathF.FusedMultiplyAdd(l[6], z0, MathF.FusedMultiplyAdd(l[7], z1, MathF.FusedMultiplyAdd(l[8], z2, u)));
+            float hpe = MathF.Sqrt(MathF.FusedMultiplyAdd(e, e, n * n));
+            float vpe = MathF.Abs(u);
+            s.KeysH[j] = ScalarKey(hpe, inverseLnGamma);
+            s.KeysV[j] = ScalarKey(vpe, inverseLnGamma);
             if (s.Integrity is { } values)
             {
                 values.HpeValues[j] = hpe;
