@@ -211,7 +211,8 @@ internal sealed class TileKernel
     /// over four satellites at a time rejects those clearly below the mask without a square root
     /// (up . d &gt;= 0 and (up . d)^2 &gt;= sin^2(mask) |d|^2, valid for masks in [0, 90) deg, loosened by
     /// 1e-12 so it never rejects a satellite the exact test keeps); the exact test then decides, so
-    /// the visible set is the same as testing every satellite exactly.
+    /// the visible set is the same as testing every satellite exactly. A block with candidates gets its
+    /// unit vectors and ENU components in vector form (one square root and division for four).
     /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private int SelectVisible(EpochWork work, GridCell cell, TileScratch s)
@@ -219,13 +220,18 @@ internal sealed class TileKernel
         EnuFrame frame = cell.Frame;
         Vec3 origin = frame.Origin;
         Vec3 up = frame.Up;
-        ReadOnlySpan<Orbits.SatelliteState> states = work.States;
         var ox = Vector256.Create(origin.X);
         var oy = Vector256.Create(origin.Y);
         var oz = Vector256.Create(origin.Z);
         var ux = Vector256.Create(up.X);
         var uy = Vector256.Create(up.Y);
         var uz = Vector256.Create(up.Z);
+        var ex = Vector256.Create(frame.East.X);
+        var ey = Vector256.Create(frame.East.Y);
+        var ez = Vector256.Create(frame.East.Z);
+        var nx = Vector256.Create(frame.North.X);
+        var ny = Vector256.Create(frame.North.Y);
+        var nz = Vector256.Create(frame.North.Z);
         var threshold = Vector256.Create(_prefilterSinMaskSquared);
         int m = 0;
         for (int block = 0; block < work.PositionX.Length; block += 4)
@@ -238,22 +244,38 @@ internal sealed class TileKernel
             var candidate = Vector256.GreaterThanOrEqual(h, Vector256<double>.Zero)
                 & Vector256.GreaterThanOrEqual(h * h, threshold * d2);
             uint bits = candidate.ExtractMostSignificantBits();
+            if (bits == 0)
+            {
+                continue;
+            }
+
+            // The candidates' unit vectors and ENU components, four at a time, in the operations and
+            // order of Vec3.Norm, Vec3 / double and EnuFrame.ToEnu (so the bits are the scalar ones).
+            var norm = Vector256.Sqrt(d2);
+            var lx = dx / norm;
+            var ly = dy / norm;
+            var lz = dz / norm;
+            ref double lanes = ref MemoryMarshal.GetArrayDataReference(s.BlockLanes);
+            lx.StoreUnsafe(ref lanes, 0);
+            ly.StoreUnsafe(ref lanes, 4);
+            lz.StoreUnsafe(ref lanes, 8);
+            ((ex * lx) + (ey * ly) + (ez * lz)).StoreUnsafe(ref lanes, 12);
+            ((nx * lx) + (ny * ly) + (nz * lz)).StoreUnsafe(ref lanes, 16);
+            ((ux * lx) + (uy * ly) + (uz * lz)).StoreUnsafe(ref lanes, 20);
             while (bits != 0)
             {
-                int sat = block + BitOperations.TrailingZeroCount(bits);
+                int lane = BitOperations.TrailingZeroCount(bits);
                 bits &= bits - 1;
-                Vec3 d = states[sat].PositionEcef - origin;
-                Vec3 u = d / d.Norm;
-                Vec3 enu = frame.ToEnu(u);
-                if (enu.Z < _sinMask)
+                double sinElevation = s.BlockLanes[20 + lane];
+                if (sinElevation < _sinMask)
                 {
                     continue;
                 }
 
-                s.Visible[m] = sat;
-                s.LineOfSight[m] = u;
-                s.LineOfSightEnu[m] = enu;
-                s.SinElevation[m] = enu.Z;
+                s.Visible[m] = block + lane;
+                s.LineOfSight[m] = new Vec3(s.BlockLanes[lane], s.BlockLanes[4 + lane], s.BlockLanes[8 + lane]);
+                s.LineOfSightEnu[m] = new Vec3(s.BlockLanes[12 + lane], s.BlockLanes[16 + lane], sinElevation);
+                s.SinElevation[m] = sinElevation;
                 m++;
             }
         }

@@ -38,6 +38,9 @@ internal sealed class TileScratch
     }
 
     public int[] Visible { get; }
+
+    /// <summary>Six Vector256 of one visibility block (unit vector ECEF, then ENU), see TileKernel.SelectVisible.</summary>
+    public double[] BlockLanes { get; } = new double[24];
     public Vec3[] LineOfSight { get; }
     public Vec3[] LineOfSightEnu { get; }
     public double[] SinElevation { get; }
