@@ -101,9 +101,10 @@ public sealed partial class DDSketch
     }
 
     /// <summary>
-    /// Makes keys lo..hi addressable. The new store contains the old one and is at least twice as
-    /// long, so growth is amortised O(1) per key; it stays below about three times the range of
-    /// keys ever added (plus <see cref="InitialBuckets"/>).
+    /// Makes keys lo..hi addressable. The new store contains the old one and is at least 9/8 as long,
+    /// so growth is amortised O(1) per key (all copies together move at most 9 times the final
+    /// length); it
+    /// stays below 1.5 times the range of keys ever added plus <see cref="InitialBuckets"/>.
     /// </summary>
     private void EnsureRange(int lo, int hi)
     {
@@ -118,10 +119,11 @@ public sealed partial class DDSketch
         long needLo = first ? lo : Math.Min(lo, oldLo);
         long needHi = first ? hi : Math.Max(hi, oldHi);
         long needed = needHi - needLo + 1;
-        // Grow by a quarter of what is needed, not by doubling: a grid of many cells holds one store per
-        // cell and sketch, and doubling left them ~2.7x larger than their key range (issue 6, memory).
-        // Growth is still geometric, so the copies stay amortised O(1) per key.
-        long length = Math.Max(needed + (needed / 4), Math.Max(counts.Length + (counts.Length / 4), InitialBuckets));
+        // Grow by an eighth of what is needed, not by doubling or a quarter: a grid of many cells holds
+        // one store per cell and sketch, and doubling left them ~2.7x larger than their key range
+        // (issue 6, memory). Growth is still geometric (needed contains the old store, so the new one is
+        // at least 9/8 of the old), which keeps the copies amortised O(1) per key.
+        long length = Math.Max(needed + (needed / 8), Math.Max(counts.Length + (counts.Length / 8), InitialBuckets));
         long slack = length - needed;
 
         // Spare room: three quarters on the side that grew (growth tends to continue that way), a
