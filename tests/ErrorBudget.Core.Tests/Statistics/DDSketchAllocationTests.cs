@@ -28,6 +28,36 @@ public class DDSketchAllocationTests
         Assert.Equal(2L * 10 * values.Length, sketch.Count); // AddAll adds each value twice
     }
 
+    [Fact]
+    public void The_bulk_inserts_into_a_compact_cell_sketch_allocate_nothing_inside_the_range()
+    {
+        // The hot loop's case: compact cell sketch, wide epoch share and batch sketches.
+        int[] keys = SketchFixtures.Keys(95, 1000);
+        int[] ends = [250, 1000];
+        var cell = new DDSketch(0.005, compactCounts: true);
+        var share = new DDSketch(0.005);
+        DDSketch[] batches = [new DDSketch(0.005), new DDSketch(0.005)];
+        void InsertAll()
+        {
+            DDSketch.AddKeysToBoth(keys, cell, 1, share, 37);
+            DDSketch.AddKeysSegmented(keys, cell, 1, share, 37, ends, batches);
+            cell.AddKeys(keys, 1);
+        }
+
+        InsertAll(); // establishes the ranges and warms up the code
+
+        long before = GC.GetAllocatedBytesForCurrentThread();
+        for (int round = 0; round < 10; round++)
+        {
+            InsertAll();
+        }
+
+        long allocated = GC.GetAllocatedBytesForCurrentThread() - before;
+        Assert.Equal(0, allocated);
+        Assert.True(cell.IsCompact);
+        Assert.Equal(11L * 3 * keys.Length, cell.Count);
+    }
+
     // The growth rule (DDSketch.EnsureRange): the needed range n is the old store joined with the new
     // keys; the new length is L = n + floor(n / 8) (at least 64); the slack L - n goes 3/4 to the side
     // that grew, 1/4 to the other (1/2 each for the first store).
