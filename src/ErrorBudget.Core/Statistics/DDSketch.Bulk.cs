@@ -91,6 +91,17 @@ public sealed partial class DDSketch
             throw new ArgumentException("Need one sketch per segment and segments that end at the last key.", nameof(ends));
         }
 
+        int previous = 0;
+        foreach (int end in ends)
+        {
+            if (end < previous)
+            {
+                throw new ArgumentException("Segment ends must not decrease (nor be negative).", nameof(ends));
+            }
+
+            previous = end;
+        }
+
         // Every widening check before any store is touched: a sketch may play several roles, so each
         // first notes all the weight it is about to receive, then decides once.
         first.NoteIncoming(keys.Length, firstWeight);
@@ -98,11 +109,6 @@ public sealed partial class DDSketch
         int start = 0;
         for (int g = 0; g < segments.Length; g++)
         {
-            if (ends[g] < start)
-            {
-                throw new ArgumentException("Segment ends must not decrease.", nameof(ends));
-            }
-
             segments[g].NoteIncoming(ends[g] - start, allWeight);
             start = ends[g];
         }
