@@ -6,10 +6,14 @@ namespace ErrorBudget.Core.Simulation;
 /// What one cell accumulates for [integrity]: protection levels per epoch, availability, and the
 /// per-sample integrity events. Integer counts only, so the order of arrival does not matter.
 /// </summary>
+/// <remarks>
+/// The protection-level sketches get weight 1 per solved epoch of this cell, so they use compact
+/// (32-bit) counts, as the cell's error sketches do (<see cref="CellAccumulator"/>).
+/// </remarks>
 internal sealed class IntegrityCellAccumulator(double relativeAccuracy)
 {
-    public DDSketch Hpl { get; } = new(relativeAccuracy);
-    public DDSketch Vpl { get; } = new(relativeAccuracy);
+    public DDSketch Hpl { get; } = new(relativeAccuracy, compactCounts: true);
+    public DDSketch Vpl { get; } = new(relativeAccuracy, compactCounts: true);
 
     /// <summary>Epochs with a position solution and PL &lt;= AL on every axis the service has.</summary>
     public long AvailableEpochs;

@@ -1,3 +1,6 @@
+using System.Numerics;
+using System.Runtime.CompilerServices;
+
 namespace ErrorBudget.Core.Statistics;
 
 /// <summary>The dense bucket store of <see cref="DDSketch"/>: growth, merging, clearing, cloning.</summary>
@@ -5,8 +8,9 @@ public sealed partial class DDSketch
 {
     private const int InitialBuckets = 64;
 
-    private long[] counts = [];
-    private int offset;               // the key of counts[0]
+    private long[] wide = [];          // the 64-bit store; empty while compact
+    private uint[] narrow = [];        // the 32-bit store; empty once wide
+    private int offset;                // the key of bucket 0 of the store in use
     private int minKey = int.MaxValue; // lowest and highest key added (empty: Max > Min)
     private int maxKey = int.MinValue;
     private long zeroCount;
@@ -14,6 +18,21 @@ public sealed partial class DDSketch
 
     /// <summary>The weight in the zero bucket.</summary>
     internal long ZeroCount => zeroCount;
+
+    /// <summary>The number of buckets allocated (<see cref="BytesPerBucket"/> each).</summary>
+    internal int AllocatedBuckets => compact ? narrow.Length : wide.Length;
+
+    /// <summary>
+    /// The buckets between the lowest and highest key added (0 when none). A segment sketch of
+    /// <see cref="AddKeysSegmented"/> counts the range of the whole call's keys.
+    /// </summary>
+    internal int UsedBuckets => minKey <= maxKey ? maxKey - minKey + 1 : 0;
+
+    /// <summary>4 while the counts are compact, 8 once wide.</summary>
+    internal int BytesPerBucket => compact ? sizeof(uint) : sizeof(long);
+
+    /// <summary>The bytes of the bucket store (buckets times 4 or 8; the object's few fields not counted).</summary>
+    internal long AllocatedBytes => (long)AllocatedBuckets * BytesPerBucket;
 
     /// <summary>The weight in bucket <paramref name="key"/> (<see cref="ZeroKey"/>: the zero bucket).</summary>
     internal long CountOf(int key)
@@ -24,16 +43,19 @@ public sealed partial class DDSketch
         }
 
         int i = key - offset;
-        return (uint)i < (uint)counts.Length ? counts[i] : 0;
-    }
+        if ((uint)i >= (uint)AllocatedBuckets)
+        {
+            return 0;
+        }
 
-    /// <summary>The number of buckets allocated (8 bytes each).</summary>
-    internal int AllocatedBuckets => counts.Length;
+        return compact ? narrow[i] : wide[i];
+    }
 
     /// <summary>
     /// Adds <paramref name="other"/>'s counts times <paramref name="scale"/>, as if each of its values
-    /// had been added again with its weight times scale. Exact and order-independent.
-    /// Range: equal <see cref="RelativeAccuracy"/>, scale &gt;= 0. Merging a sketch into itself is allowed.
+    /// had been added again with its weight times scale. Exact and order-independent; either sketch
+    /// may be compact or wide. Range: equal <see cref="RelativeAccuracy"/>, scale &gt;= 0. Merging a
+    /// sketch into itself is allowed.
     /// </summary>
     public void Merge(DDSketch other, long scale = 1)
     {
@@ -53,14 +75,18 @@ public sealed partial class DDSketch
         int hi = other.maxKey;
         long otherZero = other.zeroCount;
         long otherCount = other.count;
+        NoteIncoming(otherCount, scale);
+        CommitIncoming();
         if (lo <= hi)
         {
             EnsureRange(lo, hi);
-            long[] source = other.counts; // read after EnsureRange: other may be this sketch
-            int sourceOffset = other.offset;
-            for (int key = lo; key <= hi; key++)
+            // Stores read after widening and EnsureRange: other may be this sketch.
+            switch ((compact, other.compact))
             {
-                counts[key - offset] += source[key - sourceOffset] * scale;
+                case (true, true): AddScaled(narrow, offset, other.narrow, other.offset, lo, hi, scale); break;
+                case (true, false): AddScaled(narrow, offset, other.wide, other.offset, lo, hi, scale); break;
+                case (false, true): AddScaled(wide, offset, other.narrow, other.offset, lo, hi, scale); break;
+                case (false, false): AddScaled(wide, offset, other.wide, other.offset, lo, hi, scale); break;
             }
 
             minKey = Math.Min(minKey, lo);
@@ -71,12 +97,19 @@ public sealed partial class DDSketch
         count += otherCount * scale;
     }
 
-    /// <summary>Removes all weight; keeps the allocated store, so refilling allocates nothing.</summary>
+    /// <summary>Removes all weight; keeps the allocated store (and its width), so refilling allocates nothing.</summary>
     public void Clear()
     {
         if (minKey <= maxKey)
         {
-            Array.Clear(counts, minKey - offset, maxKey - minKey + 1);
+            if (compact)
+            {
+                Array.Clear(narrow, minKey - offset, maxKey - minKey + 1);
+            }
+            else
+            {
+                Array.Clear(wide, minKey - offset, maxKey - minKey + 1);
+            }
         }
 
         minKey = int.MaxValue;
@@ -85,12 +118,13 @@ public sealed partial class DDSketch
         count = 0;
     }
 
-    /// <summary>A deep copy.</summary>
+    /// <summary>A deep copy (compact if this one is).</summary>
     public DDSketch Clone()
     {
-        var copy = new DDSketch(RelativeAccuracy)
+        var copy = new DDSketch(RelativeAccuracy, compact)
         {
-            counts = (long[])counts.Clone(),
+            wide = (long[])wide.Clone(),
+            narrow = (uint[])narrow.Clone(),
             offset = offset,
             minKey = minKey,
             maxKey = maxKey,
@@ -101,27 +135,53 @@ public sealed partial class DDSketch
     }
 
     /// <summary>
-    /// Makes keys lo..hi addressable. The new store contains the old one and is at least twice as
-    /// long, so growth is amortised O(1) per key; it stays below about three times the range of
-    /// keys ever added (plus <see cref="InitialBuckets"/>).
+    /// target[k] += source[k] * scale for keys lo..hi. In a compact target the product is formed in
+    /// 32 bits: exact, since the widening check guarantees it fits (arithmetic mod 2^32 of a result
+    /// below 2^32).
+    /// </summary>
+    private static void AddScaled<TT, TS>(TT[] target, int targetOffset, TS[] source, int sourceOffset, int lo, int hi, long scale)
+        where TT : unmanaged, IBinaryInteger<TT>
+        where TS : unmanaged, IBinaryInteger<TS>
+    {
+        TT s = TT.CreateTruncating(scale);
+        for (int key = lo; key <= hi; key++)
+        {
+            target[key - targetOffset] += TT.CreateTruncating(source[key - sourceOffset]) * s;
+        }
+    }
+
+    /// <summary>The rare slow path of <see cref="AddKey"/>, kept out of line so the hot path inlines.</summary>
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private int GrowFor(int key)
+    {
+        EnsureRange(key, key);
+        return key - offset;
+    }
+
+    /// <summary>
+    /// Makes keys lo..hi addressable. The new store contains the old one and is at least 9/8 as long,
+    /// so growth is amortised O(1) per key (all copies together move at most 9 times the final
+    /// length); it stays below 1.5 times the range of keys ever added plus <see cref="InitialBuckets"/>.
     /// </summary>
     private void EnsureRange(int lo, int hi)
     {
+        int oldLength = AllocatedBuckets;
         long oldLo = offset;
-        long oldHi = (long)offset + counts.Length - 1;
+        long oldHi = (long)offset + oldLength - 1;
         if (lo >= oldLo && hi <= oldHi)
         {
             return;
         }
 
-        bool first = counts.Length == 0;
+        bool first = oldLength == 0;
         long needLo = first ? lo : Math.Min(lo, oldLo);
         long needHi = first ? hi : Math.Max(hi, oldHi);
         long needed = needHi - needLo + 1;
-        // Grow by a quarter of what is needed, not by doubling: a grid of many cells holds one store per
-        // cell and sketch, and doubling left them ~2.7x larger than their key range (issue 6, memory).
-        // Growth is still geometric, so the copies stay amortised O(1) per key.
-        long length = Math.Max(needed + (needed / 4), Math.Max(counts.Length + (counts.Length / 4), InitialBuckets));
+        // Grow by an eighth of what is needed, not by doubling or a quarter: a grid of many cells holds
+        // one store per cell and sketch, and doubling left them ~2.7x larger than their key range
+        // (issue 6, memory). Growth is still geometric (needed contains the old store, so the new one is
+        // at least 9/8 of the old), which keeps the copies amortised O(1) per key.
+        long length = Math.Max(needed + (needed / 8), Math.Max(oldLength + (oldLength / 8), InitialBuckets));
         long slack = length - needed;
 
         // Spare room: three quarters on the side that grew (growth tends to continue that way), a
@@ -130,13 +190,27 @@ public sealed partial class DDSketch
             : lo < oldLo ? needLo - (3 * slack / 4)
             : needLo - slack / 4;
 
-        var grown = new long[length];
-        if (minKey <= maxKey)
+        if (compact)
         {
-            Array.Copy(counts, minKey - offset, grown, minKey - newOffset, maxKey - minKey + 1);
+            narrow = Regrow(narrow, (int)length, (int)newOffset);
+        }
+        else
+        {
+            wide = Regrow(wide, (int)length, (int)newOffset);
         }
 
-        counts = grown;
         offset = (int)newOffset;
+    }
+
+    /// <summary>A store of the given length and offset holding the buckets minKey..maxKey of <paramref name="old"/>.</summary>
+    private T[] Regrow<T>(T[] old, int length, int newOffset)
+    {
+        var grown = new T[length];
+        if (minKey <= maxKey)
+        {
+            Array.Copy(old, minKey - offset, grown, minKey - newOffset, maxKey - minKey + 1);
+        }
+
+        return grown;
     }
 }

@@ -50,6 +50,22 @@ public sealed class DDSketchBulkInsertTests
         AssertSame(refB, b);
     }
 
+    [Fact]
+    public void AddKeysSegmented_refuses_decreasing_ends_before_touching_any_sketch()
+    {
+        var keys = Keys(6);
+        var first = new DDSketch(0.005, compactCounts: true);
+        var all = new DDSketch(0.005);
+        DDSketch[] segments = [new DDSketch(0.005), new DDSketch(0.005), new DDSketch(0.005)];
+        Assert.Throws<ArgumentException>(() => DDSketch.AddKeysSegmented(keys, first, 1, all, 1, [500, 400, keys.Length], segments));
+        Assert.Throws<ArgumentException>(() => DDSketch.AddKeysSegmented(keys, first, 1, all, 1, [-1, 400, keys.Length], segments));
+        Assert.True(first.IsEmpty && all.IsEmpty && segments.All(s => s.IsEmpty));
+
+        // A refused call leaves no pending weight: a compact sketch still takes exactly uint.MaxValue.
+        first.AddKeys([3], uint.MaxValue); // a bulk add: it would see a stale pending weight
+        Assert.True(first.IsCompact);
+    }
+
     private static void AssertSame(DDSketch expected, DDSketch actual)
     {
         Assert.Equal(expected.Count, actual.Count);
