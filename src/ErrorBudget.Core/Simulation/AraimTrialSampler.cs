@@ -55,8 +55,8 @@ internal static class AraimTrialSampler
             double up = position[2] + s.CommonOffset[2];
             double hpe = Math.Sqrt((e * e) + (n * n));
             double vpe = Math.Abs(up);
-            s.KeysH[j] = mapping.KeyOf(hpe);
-            s.KeysV[j] = mapping.KeyOf(vpe);
+            s.KeysH[j] = hpe > SimulationSetup.PositionErrorResolutionMeters ? mapping.KeyOf(hpe) : DDSketch.ZeroKey;
+            s.KeysV[j] = vpe > SimulationSetup.PositionErrorResolutionMeters ? mapping.KeyOf(vpe) : DDSketch.ZeroKey;
             x.HpeValues[j] = hpe;
             x.VpeValues[j] = vpe;
             // No service for this sample when the monitor alarms and cannot exclude.

@@ -43,6 +43,7 @@ public static class MonteCarloEngine
         var workPool = new ConcurrentBag<EpochWork>();
         var accumulators = new ConcurrentDictionary<int, EpochAccumulator>();
         long done = 0;
+        var compaction = new HeapCompaction();
         long satelliteTicks = 0;
         int threads = Math.Max(1, options.Threads);
 
@@ -104,6 +105,7 @@ public static class MonteCarloEngine
                     {
                         epochs[epoch] = FinishEpoch(setup, epoch, acc);
                         accumulators.TryRemove(epoch, out _);
+                        compaction.AfterEpoch();
                     }
 
                     options.Progress?.Invoke(Interlocked.Increment(ref done), setup.TotalJobs);

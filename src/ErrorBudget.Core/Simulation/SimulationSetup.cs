@@ -11,6 +11,14 @@ internal sealed class SimulationSetup
     /// <summary>Relative accuracy of every percentile sketch (DDSketch alpha).</summary>
     public const double SketchAccuracy = 0.005;
 
+    /// <summary>
+    /// Position errors (HPE, VPE) at or below this count in the sketches' zero bucket, m. No error budget
+    /// resolves a millimetre, and the low tail below it (a folded normal's smallest values reach
+    /// sigma / n) held a third of a cell's buckets: on the 1-degree grid that decided whether a run fits
+    /// in 1 GiB (issue 6). A percentile at or below it reads 0.
+    /// </summary>
+    public const double PositionErrorResolutionMeters = 1e-3;
+
     public SimulationSetup(Scenario scenario, RunOptions options)
     {
         Scenario = scenario;

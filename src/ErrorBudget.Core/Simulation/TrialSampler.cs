@@ -28,6 +28,9 @@ internal static class TrialSampler
 {
     public static bool VectorPathAvailable => Vector256.IsHardwareAccelerated;
 
+    /// <summary>HPE and VPE at or below this go to the zero bucket (<see cref="SimulationSetup.PositionErrorResolutionMeters"/>).</summary>
+    private const float Resolution = (float)SimulationSetup.PositionErrorResolutionMeters;
+
     /// <summary>Trials per vector step.</summary>
     public const int Lanes = 8;
 
@@ -47,7 +50,7 @@ internal static class TrialSampler
         var l7 = Vector256.Create(l[7]);
         var l8 = Vector256.Create(l[8]);
         var inverseLnGamma = Vector256.Create((float)acc.Hpe.InverseLnGamma);
-        var minIndexable = Vector256.Create((float)DDSketch.MinIndexable);
+        var minIndexable = Vector256.Create(Resolution);
         ref int keysH = ref MemoryMarshal.GetArrayDataReference(s.KeysH);
         ref int keysV = ref MemoryMarshal.GetArrayDataReference(s.KeysV);
         var e0 = Vector256.Create(s.OffsetSingle[0]);
@@ -134,7 +137,7 @@ internal static class TrialSampler
     }
 
     /// <summary>
-    /// Sketch keys ceil(ln x / ln gamma) of eight values, the zero key at or below MinIndexable. The
+    /// Sketch keys ceil(ln x / ln gamma) of eight values, the zero key at or below the resolution. The
     /// float logarithm is within a few ulps, so a value closer than ~1e-5 of a bucket width to a bucket
     /// edge may fall in the neighbour: its estimate stays within alpha (1 + 1e-5) of it.
     /// </summary>
@@ -149,7 +152,7 @@ internal static class TrialSampler
 
     /// <summary>The scalar twin of <see cref="VectorKeys"/> (identical keys).</summary>
     private static int ScalarKey(float x, float inverseLnGamma) =>
-        x > (float)DDSketch.MinIndexable ? (int)MathF.Ceiling(FastMathSingle.Log(x) * inverseLnGamma) : DDSketch.ZeroKey;
+        x > Resolution ? (int)MathF.Ceiling(FastMathSingle.Log(x) * inverseLnGamma) : DDSketch.ZeroKey;
 
     /// <summary>The scalar twin of <see cref="SampleVector"/>: the same fused operations, one trial at a time.</summary>
     public static void SampleScalar(int m, int trials, float[] satErrors, CellAccumulator acc, long weight, TileScratch s)

@@ -67,11 +67,28 @@ public sealed class PositionErrorSamplingTests
         // Rounded to float as it is, the common error must cancel inside S itself (its rows sum to zero),
         // up to float rounding: 4 satellites x 7 fused steps x 2^-24 x |S| (<= 1) x 6 sigma x 4.5 sigma
         // (the largest of 2e5 draws) = 4.5e-5 m.
-        var (raw, _) = Sample(commonClock: true, localSigma: 0.0, seed: 7, simd, removeCommon: false);
+        // The sketches count errors below 1 mm as zero, so the values are read from the integrity buffers.
+        var (_, raw) = Sample(commonClock: true, localSigma: 0.0, seed: 7, simd, removeCommon: false);
         double floatBound = 4 * 7 * Math.Pow(2, -24) * 6.0 * 4.5;
-        Assert.True(raw.Hpe.Quantile(1.0) <= floatBound, $"largest HPE {raw.Hpe.Quantile(1.0)} m");
-        Assert.True(raw.Vpe.Quantile(1.0) <= floatBound, $"largest VPE {raw.Vpe.Quantile(1.0)} m");
-        Assert.True(raw.Vpe.Quantile(1.0) > 0, "the raw float path does carry rounding: the bound above is what is tested");
+        double largestH = raw.Integrity!.HpeValues.Max();
+        double largestV = raw.Integrity!.VpeValues.Max();
+        Assert.True(largestH <= floatBound, $"largest HPE {largestH} m");
+        Assert.True(largestV <= floatBound, $"largest VPE {largestV} m");
+        Assert.True(largestV > 0, "the raw float path does carry rounding: the bound above is what is tested");
+    }
+
+    [Theory]
+    [InlineData(true)]
+    [InlineData(false)]
+    public void Errors_at_or_below_a_millimetre_count_as_zero(bool simd)
+    {
+        // SimulationSetup.PositionErrorResolutionMeters: sigma_U = 1e-4 m x sqrt(4/3), so the largest of
+        // 2e5 draws (~4.9 sigma) stays below 1 mm and every sample lands in the zero bucket, but 1 cm does not.
+        var (tiny, _) = Sample(commonClock: true, localSigma: 1e-4, seed: 8, simd);
+        Assert.Equal(Trials, tiny.Vpe.ZeroCount);
+        Assert.Equal(Trials, tiny.Hpe.ZeroCount);
+        var (small, _) = Sample(commonClock: true, localSigma: 1e-2, seed: 8, simd);
+        Assert.InRange(small.Vpe.ZeroCount, 1, Trials / 10);
     }
 
     [Fact]
@@ -117,7 +134,7 @@ public sealed class PositionErrorSamplingTests
     private static (CellAccumulator Cell, TileScratch Scratch) Sample(bool commonClock, double localSigma, ulong seed, bool simd, bool removeCommon = true)
     {
         const int m = 4;
-        var s = new TileScratch(m, Trials, SketchAccuracy);
+        var s = new TileScratch(m, Trials, SketchAccuracy) { Integrity = new IntegrityScratch(Trials, 0) };
         for (int i = 0; i < m; i++)
         {
             s.Visible[i] = i;
