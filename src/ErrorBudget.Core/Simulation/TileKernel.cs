@@ -143,10 +143,15 @@ internal sealed class TileKernel
 
         if (work.IsFirstBlock)
         {
-            acc.Pdop.Add(dop.Pdop);
-            acc.Hdop.Add(dop.Hdop);
-            acc.Vdop.Add(dop.Vdop);
-            s.Pdop.Add(dop.Pdop, weight);
+            // One vector logarithm for the three DOP keys (DOPs are >= 1, so no zero bucket; the
+            // series log is within 1e-15 of Math.Log, as DDSketch.KeyOf uses).
+            var keys = Vector256.ConvertToInt64(Vector256.Ceiling(
+                FastMath256.LogOfPositive(Vector256.Create(dop.Pdop, dop.Hdop, dop.Vdop, 1.0)) * Vector256.Create(acc.Pdop.InverseLnGamma)));
+            int pdopKey = (int)keys.GetElement(0);
+            acc.Pdop.AddKey(pdopKey, 1);
+            acc.Hdop.AddKey((int)keys.GetElement(1), 1);
+            acc.Vdop.AddKey((int)keys.GetElement(2), 1);
+            s.Pdop.AddKey(pdopKey, weight);
         }
 
         PositionSolution.ProjectCovariance(s.Projection.AsSpan(0, 4 * m), m, s.TruthVariance.AsSpan(0, m), s.Covariance3);
