@@ -56,4 +56,17 @@ public sealed class CheckAndBenchTests
         Assert.True(root.GetProperty("araim_evaluate_us_per_user_epoch").GetDouble() > 0);
         Assert.True(root.GetProperty("araim_test_us_per_trial").GetDouble() > 0);
     }
+
+    [Fact]
+    public async Task Bench_json_with_one_thread_has_a_warm_rate_and_a_null_efficiency()
+    {
+        // Found by hand: a one-thread bench has no parallel efficiency, and writing NaN made the JSON writer fail.
+        var (code, stdout, err) = await CliRunner.RunAsync("bench", "--json", "--trials", "1", "--threads", "1");
+        Assert.True(code == 0, err);
+        using var doc = JsonDocument.Parse(stdout);
+        var root = doc.RootElement;
+        Assert.Equal(1, root.GetProperty("threads").GetInt32());
+        Assert.Equal(JsonValueKind.Null, root.GetProperty("parallel_efficiency").ValueKind);
+        Assert.True(root.GetProperty("warm_user_solutions_per_second").GetDouble() > 0);
+    }
 }

@@ -94,15 +94,15 @@ internal static class BenchCommand
             Scenario extra = gridStep is null ? scenario : scenario with { Run = scenario.Run with { Trials = Math.Max(1, scenario.Run.Trials / 4) } };
             RunResult staged = await MonteCarloEngine.RunAsync(extra, options with { MeasureStages = true }, ct).ConfigureAwait(false);
             double stagedSeconds = clock.Elapsed.TotalSeconds;
-            double efficiency = double.NaN;
-            double warmRate = double.NaN;
+            // A warm run (the first run above also pays for compiling the kernel); with several threads also a
+            // warm one-thread run for the parallel efficiency (null in the JSON with one thread).
+            clock.Restart();
+            RunResult warmRun = await MonteCarloEngine.RunAsync(extra, options, ct).ConfigureAwait(false);
+            double warm = clock.Elapsed.TotalSeconds;
+            double warmRate = (double)warmRun.Cells.Count * warmRun.Epochs.Count * warmRun.Metadata.Trials / warm;
+            double? efficiency = null;
             if (threads > 1)
             {
-                // Both warm (the first run above also pays for compiling the kernel).
-                clock.Restart();
-                RunResult warmRun = await MonteCarloEngine.RunAsync(extra, options, ct).ConfigureAwait(false);
-                double warm = clock.Elapsed.TotalSeconds;
-                warmRate = (double)warmRun.Cells.Count * warmRun.Epochs.Count * warmRun.Metadata.Trials / warm;
                 clock.Restart();
                 await MonteCarloEngine.RunAsync(extra, options with { Threads = 1 }, ct).ConfigureAwait(false);
                 efficiency = clock.Elapsed.TotalSeconds / warm / threads;
@@ -141,7 +141,7 @@ internal static class BenchCommand
         simulation               {f.SimulationSeconds:0.00} s
         writing the result set   {f.WriteSeconds:0.00} s
         peak memory              {f.PeakMemoryBytes / 1048576.0:0} MiB
-        parallel speedup         {(double.IsNaN(f.ParallelEfficiency) ? "-" : (f.ParallelEfficiency * f.Threads).ToString("0.00", CultureInfo.InvariantCulture))} on {f.Threads} threads (efficiency {(double.IsNaN(f.ParallelEfficiency) ? "-" : f.ParallelEfficiency.ToString("0.00", CultureInfo.InvariantCulture))}; warm runs, one-thread time / {f.Threads}-thread time)
+        parallel speedup         {(f.ParallelEfficiency is double e ? (e * f.Threads).ToString("0.00", CultureInfo.InvariantCulture) : "-")} on {f.Threads} threads (efficiency {(f.ParallelEfficiency is double e2 ? e2.ToString("0.00", CultureInfo.InvariantCulture) : "-")}; warm runs, one-thread time / {f.Threads}-thread time)
         stages (thread seconds)  satellite errors {f.Stages.SatelliteErrors:0.00}, geometry {f.Stages.Geometry:0.00}, user normals {f.Stages.UserNormals:0.00}, projection {f.Stages.Projection:0.00}, sketches {f.Stages.Sketches:0.00}, integrity {f.Stages.Integrity:0.00}, writing {f.Stages.Writing:0.00} (timed run: {f.Stages.WallSeconds:0.00} s)
         ARAIM (one thread)       {f.AraimEvaluateMicroseconds:0.0} us per user-epoch (subsets, thresholds, PL search), {f.AraimTestMicroseconds:0.00} us per trial (detection test)
         """));

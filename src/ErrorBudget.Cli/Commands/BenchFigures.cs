@@ -18,7 +18,7 @@ internal sealed record BenchFigures(
     [property: JsonPropertyName("tool_version")] string ToolVersion,
     [property: JsonPropertyName("araim_evaluate_us_per_user_epoch")] double AraimEvaluateMicroseconds,
     [property: JsonPropertyName("araim_test_us_per_trial")] double AraimTestMicroseconds,
-    [property: JsonPropertyName("parallel_efficiency")] double ParallelEfficiency,
+    [property: JsonPropertyName("parallel_efficiency")] double? ParallelEfficiency,
     [property: JsonPropertyName("warm_user_solutions_per_second")] double WarmUserSolutionsPerSecond,
     [property: JsonPropertyName("stage_seconds")] BenchStages Stages);
 
