@@ -15,10 +15,10 @@ internal static class CheckReport
 {
     /// <summary>
     /// Throughput used for the time estimate, user-solutions per second per thread: a conservative
-    /// figure below what `errorbudget bench` measured on the reference machine (17 M/s on one thread
-    /// for W1 on 2026-12-01, see README).
+    /// figure below what `errorbudget bench` measured on the reference machine (20-24 M/s on one thread
+    /// for W1 on 2026-12-02, see README; runs with [integrity] tallies are slower).
     /// </summary>
-    public const double SolutionsPerSecondPerThread = 8e6;
+    public const double SolutionsPerSecondPerThread = 12e6;
 
     /// <summary>How much slower a run with ARAIM protection levels is per user-solution (integrity-faults.toml vs integrity-demo.toml).</summary>
     public const double AraimSlowdown = 25.0;
