@@ -14,9 +14,9 @@ namespace ErrorBudget.Core.Random;
 /// consecutive trials are one Vector256 of cosines or of sines.</para>
 /// <para><b>Bits.</b> b = <see cref="CounterRng.Bits"/>(key, p). The top 40 bits give the radius
 /// uniform u = (b_hi24 + (b_mid16 + 1/2) 2^-16) 2^-24 in [2^-41, 1] (in float), the low 24 bits the
-/// angle 2 pi (a + 1/2) 2^-24. The radius sqrt(-2 ln u) is at most sqrt(82 ln 2) = 7.54, so the normal's
-/// tails are cut at 7.54 sigma (two-sided mass 5e-14, below what any run resolves); the angle's 24
-/// bits keep the pair's joint density flat to 4e-7 of a turn.</para>
+/// angle 2 pi (a + 1/2) 2^-24. The radius sqrt(-2 ln u) is at most sqrt(82 ln 2) = 7.54: the pairs
+/// beyond it (probability exp(-7.54^2 / 2) = 2^-41 = 4.5e-13 per pair, below what any run resolves)
+/// are missing, so no normal exceeds 7.54 sigma; the angle's 24 bits place it to 6e-8 of a turn.</para>
 /// <para>The vector and scalar forms give identical bits (<see cref="FastMathSingle"/>).</para>
 /// </remarks>
 internal static class SingleNormals
