@@ -50,6 +50,8 @@ public sealed class SatelliteErrorSampler
     private readonly SatelliteClockBank? _clocks;
     private readonly AgeOfDataAccumulator _ageOfData;
     private readonly FaultInjector? _faults;
+    private ulong[] _orbitKeyStates = [];   // per trial of the block: key state after (seed, orbit, trial, epoch)
+    private ulong[] _clockKeyStates = [];   // per trial of the block: key state after (seed, clock, trial)
 
     public SatelliteErrorSampler(Scenario scenario, ulong seed)
     {
@@ -123,6 +125,25 @@ public sealed class SatelliteErrorSampler
         _clocks?.AdvanceTo(epoch, firstTrial, blockTrials);
         const double lightSpeed = PhysicalConstants.SpeedOfLight;
         Span<double> z = stackalloc double[3];
+        Span<double> clockNormals = stackalloc double[2];
+        // Key states after (seed, purpose, trial), once per trial of the block: each (satellite, trial)
+        // then finishes its keys with one or two absorptions instead of five (same keys, bit for bit).
+        if (_orbitKeyStates.Length < blockTrials)
+        {
+            _orbitKeyStates = new ulong[blockTrials]; // once per run: blocks never grow
+            _clockKeyStates = new ulong[blockTrials];
+        }
+
+        Span<ulong> orbitStates = _orbitKeyStates.AsSpan(0, blockTrials);
+        Span<ulong> clockStates = _clockKeyStates.AsSpan(0, blockTrials);
+        ulong orbitStart = CounterRng.KeyStart(_seed, RandomPurpose.SatelliteOrbit);
+        ulong clockStart = CounterRng.KeyStart(_seed, RandomPurpose.SatelliteClock);
+        for (int j = 0; j < blockTrials; j++)
+        {
+            orbitStates[j] = CounterRng.KeyWithB(CounterRng.KeyWithA(orbitStart, firstTrial + j), epoch);
+            clockStates[j] = CounterRng.KeyWithA(clockStart, firstTrial + j);
+        }
+
         for (int s = 0; s < _satellites; s++)
         {
             ref readonly SatelliteState st = ref states[s];
@@ -136,8 +157,7 @@ public sealed class SatelliteErrorSampler
 
             for (int j = 0; j < blockTrials; j++)
             {
-                int trial = firstTrial + j;
-                ulong orbitKey = CounterRng.Key(_seed, RandomPurpose.SatelliteOrbit, trial, epoch, s);
+                ulong orbitKey = CounterRng.KeyWithC(orbitStates[j], s); // Key(seed, orbit, trial, epoch, s)
                 CounterRng.FillNormalsScalar(orbitKey, 0, z);
                 double dr = _orbit.RadialSigmaMeters * z[0];
                 double da = _orbit.AlongSigmaMeters * z[1];
@@ -146,9 +166,10 @@ public sealed class SatelliteErrorSampler
                 double clockRange;
                 if (_clocks is null)
                 {
-                    ulong clockKey = CounterRng.Key(_seed, RandomPurpose.SatelliteClock, trial, upload, s);
-                    double offset = _clock.UploadSigmaMeters * CounterRng.Normal(clockKey, 0);
-                    double rate = _clock.GrowthSigmaMetersPerSecond * CounterRng.Normal(clockKey, 1);
+                    ulong clockKey = CounterRng.KeyWithC(CounterRng.KeyWithB(clockStates[j], upload), s); // Key(seed, clock, trial, upload, s)
+                    CounterRng.FillNormalsScalar(clockKey, 0, clockNormals); // Normal(key, 0) and (key, 1): one Box-Muller pair
+                    double offset = _clock.UploadSigmaMeters * clockNormals[0];
+                    double rate = _clock.GrowthSigmaMetersPerSecond * clockNormals[1];
                     clockRange = offset + rate * age;
                 }
                 else

@@ -44,6 +44,22 @@ public static class CounterRng
         return Absorb(h, unchecked((ulong)c), 5);
     }
 
+    /// <summary>
+    /// <see cref="Key"/> in steps, for callers that draw many keys sharing their first words:
+    /// Key(seed, purpose, a, b, c) = KeyWithC(KeyWithB(KeyWithA(KeyStart(seed, purpose), a), b), c),
+    /// bit for bit. The satellite-error sampler keeps the state after (seed, purpose, trial) per trial.
+    /// </summary>
+    public static ulong KeyStart(ulong seed, RandomPurpose purpose) => Absorb(Absorb(KeyIv, seed, 1), (ulong)purpose, 2);
+
+    /// <summary>The key state after word a (see <see cref="KeyStart"/>).</summary>
+    public static ulong KeyWithA(ulong state, long a) => Absorb(state, unchecked((ulong)a), 3);
+
+    /// <summary>The key state after word b (see <see cref="KeyStart"/>).</summary>
+    public static ulong KeyWithB(ulong state, long b) => Absorb(state, unchecked((ulong)b), 4);
+
+    /// <summary>The finished key after word c (see <see cref="KeyStart"/>).</summary>
+    public static ulong KeyWithC(ulong state, long c) => Absorb(state, unchecked((ulong)c), 5);
+
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static ulong Absorb(ulong h, ulong word, ulong position) =>
         Mix64.Moremur(h ^ Mix64.SplitMix(unchecked(word + position * Mix64.Golden)));

@@ -6,6 +6,23 @@ namespace ErrorBudget.Core.Tests.Random;
 public class CounterRngKeyTests
 {
     [Fact]
+    public void The_key_built_in_steps_is_the_key()
+    {
+        // The sampler caches the state after (seed, purpose, trial[, epoch]); that must not change any key.
+        ulong word = CounterRng.Key(9, RandomPurpose.Spare, 0, 0, 0);
+        for (int i = 0; i < 2000; i++)
+        {
+            ulong seed = CounterRng.Bits(word, (ulong)i);
+            long a = (long)CounterRng.Bits(word, (ulong)(i + 5000)) >> (i % 60);
+            long b = i - 1000;
+            long c = (long)(CounterRng.Bits(word, (ulong)(i + 9000)) >> 40);
+            var purpose = (RandomPurpose)((i % 7) + 1);
+            ulong stepwise = CounterRng.KeyWithC(CounterRng.KeyWithB(CounterRng.KeyWithA(CounterRng.KeyStart(seed, purpose), a), b), c);
+            Assert.Equal(CounterRng.Key(seed, purpose, a, b, c), stepwise);
+        }
+    }
+
+    [Fact]
     public void Every_combination_of_small_words_gives_a_distinct_key()
     {
         // 4 seeds x 7 purposes x 12 x 12 x 12 = 48 384 keys of small, structured words (the usual
