@@ -80,9 +80,11 @@ internal sealed class TileKernel
     /// <summary>The three user-level normal streams of (epoch, user), one per ENU axis, indexed by trial.</summary>
     internal static void FillUserNormals(ulong seed, int epoch, int user, int firstTrial, int count, TileScratch s)
     {
+        // Key(seed, UserLocal, epoch, user, axis) in steps: the shared prefix once, not three times.
+        ulong userState = CounterRng.KeyWithB(CounterRng.KeyWithA(CounterRng.KeyStart(seed, RandomPurpose.UserLocal), epoch), user);
         for (int axis = 0; axis < 3; axis++)
         {
-            ulong key = CounterRng.Key(seed, RandomPurpose.UserLocal, epoch, user, axis);
+            ulong key = CounterRng.KeyWithC(userState, axis);
             SingleNormals.Fill(key, firstTrial, s.Normals.AsSpan(axis * s.LaneCapacity, count));
         }
     }
