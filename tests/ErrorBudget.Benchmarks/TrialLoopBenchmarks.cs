@@ -43,10 +43,7 @@ public class TrialLoopBenchmarks
         _scratch.Cholesky3[6] = 0.1;
         _scratch.Cholesky3[7] = 0.3;
         _scratch.Cholesky3[8] = 1.7;
-        for (int q = 0; q < 9; q++)
-        {
-            _scratch.CholeskySingle[q] = (float)_scratch.Cholesky3[q];
-        }
+        _scratch.RoundForTrialLoop();
         TileKernel.BuildCoefficients(Visible, _scratch);
     }
 

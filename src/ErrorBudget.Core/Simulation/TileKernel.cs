@@ -160,15 +160,7 @@ internal sealed class TileKernel
         PositionSolution.TryCholesky3(s.Covariance3, s.Cholesky3);
         BuildCoefficients(m, s);
         CommonOffset(m, work, cell, s);
-        for (int q = 0; q < 9; q++)
-        {
-            s.CholeskySingle[q] = (float)s.Cholesky3[q];
-        }
-
-        for (int q = 0; q < 3; q++)
-        {
-            s.OffsetSingle[q] = (float)s.CommonOffset[q];
-        }
+        s.RoundForTrialLoop();
 
         int trials = work.BlockTrials;
         int lanes = (trials + SimulationSetup.NormalBatch - 1) / SimulationSetup.NormalBatch * SimulationSetup.NormalBatch;

@@ -127,6 +127,20 @@ internal sealed class TileScratch
     public long SatsInViewWeighted;
     public long Samples;
 
+    /// <summary>Rounds <see cref="Cholesky3"/> and <see cref="CommonOffset"/> to the float copies the trial loop reads.</summary>
+    public void RoundForTrialLoop()
+    {
+        for (int q = 0; q < 9; q++)
+        {
+            CholeskySingle[q] = (float)Cholesky3[q];
+        }
+
+        for (int q = 0; q < 3; q++)
+        {
+            OffsetSingle[q] = (float)CommonOffset[q];
+        }
+    }
+
     public void ResetEpochShare()
     {
         Hpe.Clear();

@@ -175,10 +175,7 @@ public sealed class PositionErrorSamplingTests
             }
         }
 
-        for (int q = 0; q < 9; q++)
-        {
-            s.CholeskySingle[q] = (float)s.Cholesky3[q];
-        }
+        s.RoundForTrialLoop();
 
         TileKernel.FillUserNormals(seed, 0, 0, 0, Trials, s);
         var acc = new CellAccumulator(SketchAccuracy);
