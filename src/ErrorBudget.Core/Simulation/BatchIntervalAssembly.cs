@@ -16,8 +16,8 @@ internal static class BatchIntervalAssembly
             vpe[b] = new DDSketch(SimulationSetup.SketchAccuracy);
             foreach (var s in scratches)
             {
-                hpe[b].Merge(s.HpeRun[b]);
-                vpe[b].Merge(s.VpeRun[b]);
+                s.HpeRun.AddBatchTo(b, hpe[b]);
+                s.VpeRun.AddBatchTo(b, vpe[b]);
             }
         }
 

@@ -10,15 +10,8 @@ internal sealed class TileScratch
     public TileScratch(int satellites, int laneCapacity, double relativeAccuracy, int batches = 1)
     {
         Batches = batches;
-        HpeRun = new DDSketch[batches];
-        VpeRun = new DDSketch[batches];
-        for (int b = 0; b < batches; b++)
-        {
-            HpeRun[b] = new DDSketch(relativeAccuracy);
-            VpeRun[b] = new DDSketch(relativeAccuracy);
-        }
-
-        SegmentEnds = new int[batches];
+        HpeRun = new BatchSketchSet(relativeAccuracy, batches);
+        VpeRun = new BatchSketchSet(relativeAccuracy, batches);
         Visible = new int[satellites];
         LineOfSight = new Vec3[satellites];
         LineOfSightEnu = new Vec3[satellites];
@@ -89,13 +82,8 @@ internal sealed class TileScratch
     /// This worker's run-long area-weighted sketches per trial batch: the kernel adds each key to its
     /// batch here directly (no per-epoch merge), and the workers' sketches are merged once at the end.
     /// </summary>
-    public DDSketch[] HpeRun { get; }
-    public DDSketch[] VpeRun { get; }
-
-    /// <summary>The current block's batch segments: trials [ends[g-1], ends[g]) of the block belong to batch FirstSegmentBatch + g.</summary>
-    public int[] SegmentEnds { get; }
-    public int SegmentCount;
-    public int FirstSegmentBatch;
+    public BatchSketchSet HpeRun { get; }
+    public BatchSketchSet VpeRun { get; }
 
     /// <summary>Stage timing (benchmark only); null when not measuring.</summary>
     public StageClock? Stages { get; set; }
@@ -103,23 +91,11 @@ internal sealed class TileScratch
     /// <summary>Integrity buffers and shares; null without [integrity].</summary>
     public IntegrityScratch? Integrity { get; set; }
 
-    /// <summary>
-    /// Splits a block's trials [firstTrial, firstTrial + count) into the batches b = floor(t B / T):
-    /// the same split for every user of the block.
-    /// </summary>
+    /// <summary>Splits a block's trials [firstTrial, firstTrial + count) into the batches b = floor(t B / T) (<see cref="BatchSketchSet.SetBlock"/>).</summary>
     public void PrepareSegments(int firstTrial, int count, int totalTrials)
     {
-        int last = firstTrial + count - 1;
-        int firstBatch = (int)((long)firstTrial * Batches / totalTrials);
-        int lastBatch = (int)((long)last * Batches / totalTrials);
-        FirstSegmentBatch = firstBatch;
-        SegmentCount = lastBatch - firstBatch + 1;
-        for (int g = 0; g < SegmentCount; g++)
-        {
-            int b = firstBatch + g + 1; // first trial of the next batch: ceil(b T / B)
-            long nextStart = ((long)b * totalTrials + Batches - 1) / Batches;
-            SegmentEnds[g] = (int)(Math.Min(nextStart, firstTrial + count) - firstTrial);
-        }
+        HpeRun.SetBlock(firstTrial, count, totalTrials);
+        VpeRun.SetBlock(firstTrial, count, totalTrials);
     }
 
     public long WeightSum;

@@ -131,9 +131,8 @@ internal static class TrialSampler
             return;
         }
 
-        ReadOnlySpan<int> ends = s.SegmentEnds.AsSpan(0, s.SegmentCount);
-        DDSketch.AddKeysSegmented(h, acc.Hpe, 1, s.Hpe, weight, ends, s.HpeRun.AsSpan(s.FirstSegmentBatch, s.SegmentCount));
-        DDSketch.AddKeysSegmented(v, acc.Vpe, 1, s.Vpe, weight, ends, s.VpeRun.AsSpan(s.FirstSegmentBatch, s.SegmentCount));
+        DDSketch.AddKeysBatched(h, acc.Hpe, 1, s.Hpe, weight, s.HpeRun);
+        DDSketch.AddKeysBatched(v, acc.Vpe, 1, s.Vpe, weight, s.VpeRun);
     }
 
     /// <summary>

@@ -75,91 +75,79 @@ public sealed partial class DDSketch
 
     /// <summary>
     /// Adds every key to <paramref name="first"/> (weight <paramref name="firstWeight"/>) and to
-    /// <paramref name="all"/> (weight <paramref name="allWeight"/>), and the keys of segment g
-    /// (keys [ends[g-1], ends[g]), ends[-1] = 0) to <paramref name="segments"/>[g] with
-    /// <paramref name="allWeight"/>: one scan of the keys and one range reservation per sketch, then
-    /// plain increments. Splits an epoch's samples into trial batches without a second pass.
-    /// Range: weights &gt;= 0; ends non-decreasing.
+    /// <paramref name="all"/> (weight <paramref name="allWeight"/>), and key j to the batch of trial j
+    /// of <paramref name="batches"/>' current block (weight <paramref name="allWeight"/>): one scan of
+    /// the keys, one range check per store, then one pass of plain increments. Splits an epoch's samples
+    /// into trial batches without a second pass. Range: weights &gt;= 0; one key per trial of the block.
     /// </summary>
-    public static void AddKeysSegmented(
-        ReadOnlySpan<int> keys, DDSketch first, long firstWeight, DDSketch all, long allWeight, ReadOnlySpan<int> ends, ReadOnlySpan<DDSketch> segments)
+    public static void AddKeysBatched(
+        ReadOnlySpan<int> keys, DDSketch first, long firstWeight, DDSketch all, long allWeight, BatchSketchSet batches)
     {
         ArgumentNullException.ThrowIfNull(first);
         ArgumentNullException.ThrowIfNull(all);
-        if (ends.Length != segments.Length || (ends.Length > 0 && ends[^1] != keys.Length))
+        ArgumentNullException.ThrowIfNull(batches);
+        if (keys.Length != batches.BlockTrials)
         {
-            throw new ArgumentException("Need one sketch per segment and segments that end at the last key.", nameof(ends));
+            throw new ArgumentException($"Need one key per trial of the block ({batches.BlockTrials}), got {keys.Length}.", nameof(keys));
         }
 
-        int previous = 0;
-        foreach (int end in ends)
+        if (batches.RelativeAccuracy != first.RelativeAccuracy || all.RelativeAccuracy != first.RelativeAccuracy)
         {
-            if (end < previous)
-            {
-                throw new ArgumentException("Segment ends must not decrease (nor be negative).", nameof(ends));
-            }
-
-            previous = end;
+            throw new ArgumentException("Relative accuracies differ.", nameof(batches));
         }
 
-        // Every widening check before any store is touched: a sketch may play several roles, so each
-        // first notes all the weight it is about to receive, then decides once.
+        // Every widening check before any store is touched: first and all may be the same sketch.
         first.NoteIncoming(keys.Length, firstWeight);
         all.NoteIncoming(keys.Length, allWeight);
-        int start = 0;
-        for (int g = 0; g < segments.Length; g++)
-        {
-            segments[g].NoteIncoming(ends[g] - start, allWeight);
-            start = ends[g];
-        }
-
         first.CommitIncoming();
         all.CommitIncoming();
-        foreach (DDSketch segment in segments)
-        {
-            segment.CommitIncoming();
-        }
-
         ScanKeys(keys, out int lo, out int hi, out long zeros);
         if (lo <= hi)
         {
             first.ReserveKeys(lo, hi);
             all.ReserveKeys(lo, hi);
-            foreach (DDSketch segment in segments)
-            {
-                segment.ReserveKeys(lo, hi);
-            }
+            batches.Reserve(lo, hi);
         }
 
-        int a = first.offset, c = all.offset;
+        int a = first.offset, b = all.offset;
+        long[] c = batches.Counts;
+        ReadOnlySpan<int> bases = batches.TrialBase;
         switch ((first.compact, all.compact))
         {
-            case (true, false): AddSegments(keys, first.narrow, a, (uint)firstWeight, all.wide, c, allWeight, ends, segments, allWeight); break;
-            case (false, false): AddSegments(keys, first.wide, a, firstWeight, all.wide, c, allWeight, ends, segments, allWeight); break;
-            case (true, true): AddSegments(keys, first.narrow, a, (uint)firstWeight, all.narrow, c, (uint)allWeight, ends, segments, allWeight); break;
-            case (false, true): AddSegments(keys, first.wide, a, firstWeight, all.narrow, c, (uint)allWeight, ends, segments, allWeight); break;
+            case (true, false): AddEachBatched(keys, first.narrow, a, (uint)firstWeight, all.wide, b, allWeight, c, bases, allWeight, batches); break;
+            case (false, false): AddEachBatched(keys, first.wide, a, firstWeight, all.wide, b, allWeight, c, bases, allWeight, batches); break;
+            case (true, true): AddEachBatched(keys, first.narrow, a, (uint)firstWeight, all.narrow, b, (uint)allWeight, c, bases, allWeight, batches); break;
+            case (false, true): AddEachBatched(keys, first.wide, a, firstWeight, all.narrow, b, (uint)allWeight, c, bases, allWeight, batches); break;
         }
 
         first.AddTotals(keys.Length, zeros, firstWeight);
         all.AddTotals(keys.Length, zeros, allWeight);
+        batches.AddBlockTotals(allWeight);
     }
 
-    /// <summary>The segment loop of <see cref="AddKeysSegmented"/> for one pair of first/all bucket types.</summary>
-    private static void AddSegments<TA, TC>(
-        ReadOnlySpan<int> keys, TA[] a, int aShift, TA aWeight, TC[] c, int cShift, TC cWeight, ReadOnlySpan<int> ends, ReadOnlySpan<DDSketch> segments, long allWeight)
+    /// <summary>The pass of <see cref="AddKeysBatched"/> for one pair of first/all bucket types (zero keys go to their batch's zero bucket).</summary>
+    private static void AddEachBatched<TA, TB>(
+        ReadOnlySpan<int> keys, TA[] a, int aShift, TA aWeight, TB[] b, int bShift, TB bWeight, long[] c, ReadOnlySpan<int> cBase, long cWeight, BatchSketchSet batches)
         where TA : unmanaged, IBinaryInteger<TA>
-        where TC : unmanaged, IBinaryInteger<TC>
+        where TB : unmanaged, IBinaryInteger<TB>
     {
-        int start = 0;
-        for (int g = 0; g < segments.Length; g++)
+        ref TA a0 = ref MemoryMarshal.GetArrayDataReference(a);
+        ref TB b0 = ref MemoryMarshal.GetArrayDataReference(b);
+        ref long c0 = ref MemoryMarshal.GetArrayDataReference(c);
+        ref int base0 = ref MemoryMarshal.GetReference(cBase);
+        for (int j = 0; j < keys.Length; j++)
         {
-            DDSketch second = segments[g];
-            ReadOnlySpan<int> segment = keys[start..ends[g]];
-            start = ends[g];
-            long segmentZeros = second.compact
-                ? AddEach(segment, a, aShift, aWeight, second.narrow, second.offset, (uint)allWeight, c, cShift, cWeight)
-                : AddEach(segment, a, aShift, aWeight, second.wide, second.offset, allWeight, c, cShift, cWeight);
-            second.AddTotals(segment.Length, segmentZeros, allWeight);
+            int key = keys[j];
+            if (key != ZeroKey)
+            {
+                Unsafe.Add(ref a0, key - aShift) += aWeight;
+                Unsafe.Add(ref b0, key - bShift) += bWeight;
+                Unsafe.Add(ref c0, Unsafe.Add(ref base0, j) + key) += cWeight;
+            }
+            else
+            {
+                batches.ZeroCounts[batches.TrialBatch[j]] += cWeight;
+            }
         }
     }
 
@@ -192,34 +180,6 @@ public sealed partial class DDSketch
                 Unsafe.Add(ref b0, key - bShift) += bWeight;
             }
         }
-    }
-
-    /// <summary>The three-sketch form, returning the number of zero keys (counted on the way).</summary>
-    private static long AddEach<TA, TB, TC>(
-        ReadOnlySpan<int> keys, TA[] a, int aShift, TA aWeight, TB[] b, int bShift, TB bWeight, TC[] c, int cShift, TC cWeight)
-        where TA : unmanaged, IBinaryInteger<TA>
-        where TB : unmanaged, IBinaryInteger<TB>
-        where TC : unmanaged, IBinaryInteger<TC>
-    {
-        ref TA a0 = ref MemoryMarshal.GetArrayDataReference(a);
-        ref TB b0 = ref MemoryMarshal.GetArrayDataReference(b);
-        ref TC c0 = ref MemoryMarshal.GetArrayDataReference(c);
-        long zeros = 0;
-        foreach (int key in keys)
-        {
-            if (key != ZeroKey)
-            {
-                Unsafe.Add(ref a0, key - aShift) += aWeight;
-                Unsafe.Add(ref b0, key - bShift) += bWeight;
-                Unsafe.Add(ref c0, key - cShift) += cWeight;
-            }
-            else
-            {
-                zeros++;
-            }
-        }
-
-        return zeros;
     }
 
     /// <summary>Makes [lo, hi] addressable and widens the seen range to it.</summary>

@@ -25,8 +25,7 @@ public sealed partial class DDSketch
     internal int AllocatedBuckets => compact ? narrow.Length : wide.Length;
 
     /// <summary>
-    /// The buckets between the lowest and highest key added (0 when none). A segment sketch of
-    /// <see cref="AddKeysSegmented"/> counts the range of the whole call's keys.
+    /// The buckets between the lowest and highest key added (0 when none).
     /// </summary>
     internal int UsedBuckets => minKey <= maxKey ? maxKey - minKey + 1 : 0;
 

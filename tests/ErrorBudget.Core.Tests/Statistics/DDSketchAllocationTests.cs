@@ -33,14 +33,14 @@ public class DDSketchAllocationTests
     {
         // The hot loop's case: compact cell sketch, wide epoch share and batch sketches.
         int[] keys = SketchFixtures.Keys(95, 1000);
-        int[] ends = [250, 1000];
         var cell = new DDSketch(0.005, compactCounts: true);
         var share = new DDSketch(0.005);
-        DDSketch[] batches = [new DDSketch(0.005), new DDSketch(0.005)];
+        var batches = new BatchSketchSet(0.005, 4);
+        batches.SetBlock(0, keys.Length, keys.Length);
         void InsertAll()
         {
             DDSketch.AddKeysToBoth(keys, cell, 1, share, 37);
-            DDSketch.AddKeysSegmented(keys, cell, 1, share, 37, ends, batches);
+            DDSketch.AddKeysBatched(keys, cell, 1, share, 37, batches);
             cell.AddKeys(keys, 1);
         }
 

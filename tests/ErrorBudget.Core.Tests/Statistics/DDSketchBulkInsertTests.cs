@@ -51,19 +51,45 @@ public sealed class DDSketchBulkInsertTests
     }
 
     [Fact]
-    public void AddKeysSegmented_refuses_decreasing_ends_before_touching_any_sketch()
+    public void AddKeysBatched_refuses_keys_that_do_not_match_the_block_before_touching_any_sketch()
     {
         var keys = Keys(6);
         var first = new DDSketch(0.005, compactCounts: true);
         var all = new DDSketch(0.005);
-        DDSketch[] segments = [new DDSketch(0.005), new DDSketch(0.005), new DDSketch(0.005)];
-        Assert.Throws<ArgumentException>(() => DDSketch.AddKeysSegmented(keys, first, 1, all, 1, [500, 400, keys.Length], segments));
-        Assert.Throws<ArgumentException>(() => DDSketch.AddKeysSegmented(keys, first, 1, all, 1, [-1, 400, keys.Length], segments));
-        Assert.True(first.IsEmpty && all.IsEmpty && segments.All(s => s.IsEmpty));
+        var batches = new BatchSketchSet(0.005, 3);
+        batches.SetBlock(0, keys.Length - 1, keys.Length);
+        Assert.Throws<ArgumentException>(() => DDSketch.AddKeysBatched(keys, first, 1, all, 1, batches));
+        Assert.True(first.IsEmpty && all.IsEmpty);
+        Assert.Equal(0, batches.CountOf(0) + batches.CountOf(1) + batches.CountOf(2));
 
         // A refused call leaves no pending weight: a compact sketch still takes exactly uint.MaxValue.
         first.AddKeys([3], uint.MaxValue); // a bulk add: it would see a stale pending weight
         Assert.True(first.IsCompact);
+    }
+
+    [Fact]
+    public void A_block_splits_its_trials_into_the_batches_floor_t_B_over_T_and_a_bad_block_is_refused()
+    {
+        // 10 trials in 3 batches: floor(3 t / 10) = 0,0,0,0,1,1,1,2,2,2. Block [3, 8) holds 0,1,1,1,2.
+        var batches = new BatchSketchSet(0.005, 3);
+        batches.SetBlock(3, 5, 10);
+        Assert.Equal([0, 1, 1, 1, 2], batches.TrialBatch.ToArray());
+        var first = new DDSketch(0.005);
+        DDSketch.AddKeysBatched([5, 6, 7, DDSketch.ZeroKey, 9], first, 1, first, 2, batches);
+        Assert.Equal([2L, 6L, 2L], [batches.CountOf(0), batches.CountOf(1), batches.CountOf(2)]);
+        var middle = new DDSketch(0.005);
+        batches.AddBatchTo(1, middle);
+        Assert.Equal(6, middle.Count);
+        Assert.Equal(2, middle.ZeroCount);
+        Assert.Equal(2, middle.CountOf(6));
+        Assert.Equal(2, middle.CountOf(7));
+        Assert.Equal(0, middle.CountOf(5));
+
+        Assert.Throws<ArgumentOutOfRangeException>(() => batches.SetBlock(8, 5, 10));
+        Assert.Throws<ArgumentOutOfRangeException>(() => batches.SetBlock(-1, 5, 10));
+        Assert.Throws<ArgumentOutOfRangeException>(() => batches.SetBlock(0, 0, 10));
+        Assert.Throws<ArgumentOutOfRangeException>(() => new BatchSketchSet(0.005, 0));
+        Assert.Throws<ArgumentException>(() => batches.AddBatchTo(0, new DDSketch(0.01)));
     }
 
     private static void AssertSame(DDSketch expected, DDSketch actual)

@@ -11,27 +11,6 @@ public sealed class DDSketchCompactCountsTests
 {
     public static TheoryData<bool, bool> Pairs => new() { { true, true }, { true, false }, { false, true }, { false, false } };
 
-    /// <summary>first, all, segments: each compact or wide; "mixed" segments alternate.</summary>
-    public static TheoryData<bool, bool, string> Triples
-    {
-        get
-        {
-            var data = new TheoryData<bool, bool, string>();
-            foreach (bool first in new[] { true, false })
-            {
-                foreach (bool all in new[] { true, false })
-                {
-                    foreach (string segments in new[] { "compact", "wide", "mixed" })
-                    {
-                        data.Add(first, all, segments);
-                    }
-                }
-            }
-
-            return data;
-        }
-    }
-
     [Fact]
     public void AddKey_and_Add_give_the_same_sketch_compact_or_wide()
     {
@@ -96,41 +75,41 @@ public sealed class DDSketchCompactCountsTests
     }
 
     [Theory]
-    [MemberData(nameof(Triples))]
-    public void AddKeysSegmented_equals_AddKeys_on_wide_sketches_for_every_combination(bool firstCompact, bool allCompact, string segmentMode)
+    [MemberData(nameof(Pairs))]
+    public void AddKeysBatched_equals_AddKeys_per_batch_for_every_combination(bool firstCompact, bool allCompact)
     {
-        int[] ends = [100, 100, 450, 997]; // an empty segment included
+        // Three blocks of 997 trials of a 2,991-trial run in 7 batches (batches straddle blocks), keys over
+        // three scales so the batch store grows both ways, zero keys included.
+        const int blockTrials = 997, calls = 3, batchCount = 7;
+        const int totalTrials = blockTrials * calls;
         var first = new DDSketch(0.005, firstCompact);
         var all = new DDSketch(0.005, allCompact);
-        var segments = new DDSketch[ends.Length];
-        for (int g = 0; g < segments.Length; g++)
-        {
-            bool compact = segmentMode == "compact" || (segmentMode == "mixed" && g % 2 == 0);
-            segments[g] = new DDSketch(0.005, compact);
-        }
-
+        var batches = new BatchSketchSet(0.005, batchCount);
         var firstReference = new DDSketch(0.005);
         var allReference = new DDSketch(0.005);
-        DDSketch[] segmentReferences = [.. ends.Select(_ => new DDSketch(0.005))];
-        for (int call = 0; call < 3; call++)
+        DDSketch[] batchReferences = [.. Enumerable.Range(0, batchCount).Select(_ => new DDSketch(0.005))];
+        for (int call = 0; call < calls; call++)
         {
-            int[] keys = Keys(30 + call, ends[^1], scale: Math.Pow(10, call - 1));
-            DDSketch.AddKeysSegmented(keys, first, 1, all, 37, ends, segments);
+            int[] keys = Keys(30 + call, blockTrials, scale: Math.Pow(10, call - 1));
+            batches.SetBlock(call * blockTrials, blockTrials, totalTrials);
+            DDSketch.AddKeysBatched(keys, first, 1, all, 37, batches);
             firstReference.AddKeys(keys, 1);
             allReference.AddKeys(keys, 37);
-            int start = 0;
-            for (int g = 0; g < ends.Length; g++)
+            for (int j = 0; j < blockTrials; j++)
             {
-                segmentReferences[g].AddKeys(keys.AsSpan(start, ends[g] - start), 37);
-                start = ends[g];
+                int trial = (call * blockTrials) + j;
+                batchReferences[trial * batchCount / totalTrials].AddKey(keys[j], 37);
             }
         }
 
         AssertIdentical(firstReference, first);
         AssertIdentical(allReference, all);
-        for (int g = 0; g < ends.Length; g++)
+        for (int g = 0; g < batchCount; g++)
         {
-            AssertIdentical(segmentReferences[g], segments[g], sameUsedRange: false);
+            var rebuilt = new DDSketch(0.005);
+            batches.AddBatchTo(g, rebuilt);
+            Assert.Equal(batchReferences[g].Count, batches.CountOf(g));
+            AssertIdentical(batchReferences[g], rebuilt);
         }
     }
 

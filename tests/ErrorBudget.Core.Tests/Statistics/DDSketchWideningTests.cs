@@ -108,40 +108,16 @@ public sealed class DDSketchWideningTests
         Assert.Equal(2 * Large, compact.CountOf(9));
         AssertIdentical(wide, compact);
 
-        // The segmented insert: first is also a segment's sketch; 2 x 3e9 again.
-        var first = new DDSketch(0.005, compactCounts: true);
-        var all = new DDSketch(0.005);
+        // The batched insert: first is also the epoch share; 2 x 3e9 again. The batch store is 64-bit.
+        var shared = new DDSketch(0.005, compactCounts: true);
+        var batches = new BatchSketchSet(0.005, 2);
+        batches.SetBlock(0, 2, 2);
         int[] keys = [4, 4];
-        DDSketch.AddKeysSegmented(keys, first, Large / 2, all, Large, [1, 2], [new DDSketch(0.005, compactCounts: true), first]);
-        Assert.False(first.IsCompact);
-        Assert.Equal((2 * (Large / 2)) + Large, first.CountOf(4));
-        Assert.Equal((2 * (Large / 2)) + Large, first.Count);
-    }
-
-    [Fact]
-    public void Segments_widen_on_their_own_weight_only()
-    {
-        // 1000 keys at weight 3e6 to 'all' and the segments (100 and 900 keys): after one call 'all'
-        // holds 3e9, the segments 3e8 and 2.7e9, all below the limit. A second call takes 'all' (6e9)
-        // and the long segment (5.4e9) past it, but not the short segment (6e8) nor 'first' (2000).
-        int[] keys = Keys(83, 1000);
-        int[] ends = [100, 1000];
-        var first = new DDSketch(0.005, compactCounts: true);
-        var all = new DDSketch(0.005, compactCounts: true);
-        DDSketch[] segments = [new DDSketch(0.005, compactCounts: true), new DDSketch(0.005, compactCounts: true)];
-        DDSketch.AddKeysSegmented(keys, first, 1, all, 3_000_000, ends, segments);
-        Assert.True(all.IsCompact && segments[0].IsCompact && segments[1].IsCompact);
-        DDSketch.AddKeysSegmented(keys, first, 1, all, 3_000_000, ends, segments);
-        Assert.True(first.IsCompact);
-        Assert.False(all.IsCompact);
-        Assert.True(segments[0].IsCompact);
-        Assert.False(segments[1].IsCompact);
-
-        var reference = new DDSketch(0.005);
-        reference.AddKeys(keys.AsSpan(100), 6_000_000);
-        AssertIdentical(reference, segments[1], sameUsedRange: false);
-        reference.AddKeys(keys.AsSpan(0, 100), 6_000_000);
-        AssertIdentical(reference, all);
+        DDSketch.AddKeysBatched(keys, shared, Large / 2, shared, Large, batches);
+        Assert.False(shared.IsCompact);
+        Assert.Equal((2 * (Large / 2)) + (2 * Large), shared.CountOf(4));
+        Assert.Equal(Large, batches.CountOf(0));
+        Assert.Equal(Large, batches.CountOf(1));
     }
 
     [Fact]
