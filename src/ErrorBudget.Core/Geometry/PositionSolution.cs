@@ -98,15 +98,15 @@ public static partial class PositionSolution
         }
 
         Span<double> normal = stackalloc double[16];
-        Span<double> h = stackalloc double[16];
 
+        // The DOPs need only the diagonal of (GᵀG)⁻¹.
         FillLower(normal, u00, u10, u11, u20, u21, u22, u30, u31, u32, m);
-        if (!SymmetricMatrix4.TryInvert(normal, h, RelativePivotTolerance))
+        if (!SymmetricMatrix4.TryInverseDiagonal(normal, RelativePivotTolerance, out double hE, out double hN, out double hU, out double hT))
         {
             return false;
         }
 
-        double gdop = Math.Sqrt(h[0] + h[5] + h[10] + h[15]);
+        double gdop = Math.Sqrt(hE + hN + hU + hT);
         if (!(gdop <= MaxGdop))
         {
             return false;
@@ -134,10 +134,10 @@ public static partial class PositionSolution
 
         dop = new Dop(
             Gdop: gdop,
-            Pdop: Math.Sqrt(h[0] + h[5] + h[10]),
-            Hdop: Math.Sqrt(h[0] + h[5]),
-            Vdop: Math.Sqrt(h[10]),
-            Tdop: Math.Sqrt(h[15]));
+            Pdop: Math.Sqrt(hE + hN + hU),
+            Hdop: Math.Sqrt(hE + hN),
+            Vdop: Math.Sqrt(hU),
+            Tdop: Math.Sqrt(hT));
         return true;
     }
 

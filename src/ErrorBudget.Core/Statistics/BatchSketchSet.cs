@@ -28,7 +28,10 @@ public sealed class BatchSketchSet
     // counts[trialBase[j] + k] (trialBase = batch * length - offset, refreshed when the store moves).
     private int[] trialBatch = [];
     private int[] trialBase = [];
+    private readonly int[] blockCounts; // trials of the current block per batch
+    private int blockFirstTrial = -1;
     private int blockTrials;
+    private int blockRunTrials;
     private int firstBatch;
     private int lastBatch = -1;
 
@@ -40,6 +43,7 @@ public sealed class BatchSketchSet
         Batches = batches;
         zeroCounts = new long[batches];
         totals = new long[batches];
+        blockCounts = new int[batches];
     }
 
     public double RelativeAccuracy { get; }
@@ -72,16 +76,26 @@ public sealed class BatchSketchSet
             throw new ArgumentOutOfRangeException(nameof(count), $"Block [{firstTrial}, {(long)firstTrial + count}) does not lie in [0, {totalTrials}).");
         }
 
+        if (firstTrial == blockFirstTrial && count == blockTrials && totalTrials == blockRunTrials)
+        {
+            return; // every tile of a block sets the same block: nothing to recompute
+        }
+
         if (trialBatch.Length < count)
         {
             trialBatch = new int[count];
             trialBase = new int[count];
         }
 
+        blockFirstTrial = firstTrial;
         blockTrials = count;
+        blockRunTrials = totalTrials;
+        Array.Clear(blockCounts);
         for (int j = 0; j < count; j++)
         {
-            trialBatch[j] = (int)((long)(firstTrial + j) * Batches / totalTrials);
+            int g = (int)((long)(firstTrial + j) * Batches / totalTrials);
+            trialBatch[j] = g;
+            blockCounts[g]++;
         }
 
         firstBatch = trialBatch[0];
@@ -92,17 +106,9 @@ public sealed class BatchSketchSet
     /// <summary>Adds, for each batch g in the block, the number of the block's trials in g times weight to g's total.</summary>
     internal void AddBlockTotals(long weight)
     {
-        ReadOnlySpan<int> batch = TrialBatch;
-        int j = 0;
         for (int g = firstBatch; g <= lastBatch; g++)
         {
-            int start = j;
-            while (j < batch.Length && batch[j] == g)
-            {
-                j++;
-            }
-
-            totals[g] += (j - start) * weight;
+            totals[g] += blockCounts[g] * weight;
         }
     }
 
