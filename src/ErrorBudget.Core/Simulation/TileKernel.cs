@@ -65,7 +65,7 @@ internal sealed class TileKernel
         scratch.ResetEpochShare();
         if (scratch.Batches > 1)
         {
-            scratch.PrepareSegments(work.FirstTrial, work.BlockTrials, _trials);
+            scratch.SetTrialBlock(work.FirstTrial, work.BlockTrials, _trials);
         }
 
         lock (tile.Gate)

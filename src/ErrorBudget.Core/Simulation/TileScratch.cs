@@ -92,7 +92,7 @@ internal sealed class TileScratch
     public IntegrityScratch? Integrity { get; set; }
 
     /// <summary>Splits a block's trials [firstTrial, firstTrial + count) into the batches b = floor(t B / T) (<see cref="BatchSketchSet.SetBlock"/>).</summary>
-    public void PrepareSegments(int firstTrial, int count, int totalTrials)
+    public void SetTrialBlock(int firstTrial, int count, int totalTrials)
     {
         HpeRun.SetBlock(firstTrial, count, totalTrials);
         VpeRun.SetBlock(firstTrial, count, totalTrials);
