@@ -55,4 +55,22 @@ internal static class Mix64
         x = (x ^ (x >> 33)) * Vector256.Create(0x1C69B3F74AC4AE35UL);
         return x ^ (x >> 27);
     }
+
+    /// <summary><see cref="SplitMix(Vector256{ulong})"/> on eight lanes.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static Vector512<ulong> SplitMix(Vector512<ulong> z)
+    {
+        z = (z ^ (z >> 30)) * Vector512.Create(0xBF58476D1CE4E5B9UL);
+        z = (z ^ (z >> 27)) * Vector512.Create(0x94D049BB133111EBUL);
+        return z ^ (z >> 31);
+    }
+
+    /// <summary><see cref="Moremur(Vector256{ulong})"/> on eight lanes.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static Vector512<ulong> Moremur(Vector512<ulong> x)
+    {
+        x = (x ^ (x >> 27)) * Vector512.Create(0x3C79AC492BA7B653UL);
+        x = (x ^ (x >> 33)) * Vector512.Create(0x1C69B3F74AC4AE35UL);
+        return x ^ (x >> 27);
+    }
 }

@@ -26,18 +26,35 @@ internal static class SingleNormals
 
     /// <summary>
     /// Writes the normals of trials [firstTrial, firstTrial + destination.Length) of stream
-    /// <paramref name="key"/>. Vector groups when <see cref="Vector256.IsHardwareAccelerated"/> and the
+    /// <paramref name="key"/>. Vector groups (Vector512 where accelerated, else Vector256) where the
     /// trials are group-aligned, the scalar form elsewhere (same bits). Allocates nothing.
     /// </summary>
-    public static void Fill(ulong key, long firstTrial, Span<float> destination)
+    public static void Fill(ulong key, long firstTrial, Span<float> destination) =>
+        Fill(key, firstTrial, destination, VectorBits);
+
+    /// <summary>The widest vector the hardware accelerates for <see cref="Fill(ulong, long, Span{float})"/>: 512, 256 or 0.</summary>
+    internal static readonly int VectorBits =
+        Vector512.IsHardwareAccelerated ? 512 : Vector256.IsHardwareAccelerated ? 256 : 0;
+
+    /// <summary>
+    /// <see cref="Fill(ulong, long, Span{float})"/> with a chosen vector width: 512 (two groups per step,
+    /// then 256 for the last group and a half), 256, or 0 for the scalar form. Every width writes the
+    /// same bits. Range: vectorBits in {0, 256, 512}, at most what the hardware accelerates.
+    /// </summary>
+    internal static void Fill(ulong key, long firstTrial, Span<float> destination, int vectorBits)
     {
         int i = 0;
-        if (Vector256.IsHardwareAccelerated)
+        if (vectorBits > 0)
         {
             while (i < destination.Length && ((firstTrial + i) & 15) != 0)
             {
                 destination[i] = OfTrial(key, firstTrial + i);
                 i++;
+            }
+
+            if (vectorBits == 512)
+            {
+                i += FillGroupPairs(key, (firstTrial + i) >> 4, destination[i..]);
             }
 
             i += FillGroups(key, (firstTrial + i) >> 4, destination[i..]);
@@ -104,5 +121,50 @@ internal static class SingleNormals
         }
 
         return 16 * groups;
+    }
+
+    /// <summary>
+    /// <see cref="FillGroups"/> two groups per step: the eight pairs of a group in one Vector512 of
+    /// 64-bit draws, the 32 normals of two groups in two Vector512 of float (cosine and sine halves).
+    /// Writes whole pairs of groups only and returns the normals written (a multiple of 32); the
+    /// rest is left to <see cref="FillGroups"/>. Same operations per lane, so the same bits.
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static int FillGroupPairs(ulong key, long firstGroup, Span<float> destination)
+    {
+        int steps = destination.Length / 32;
+        ref float dst = ref MemoryMarshal.GetReference(destination);
+        Vector512<ulong> keys = Vector512.Create(key);
+        Vector512<ulong> golden = Vector512.Create(Mix64.Golden);
+        // Weyl values key + (p + 1) Golden for pairs p = 8 g + 0..7 (group g) and 8 (g + 1) + 0..7.
+        Vector512<ulong> weylFirst = keys + ((Vector512.Create((ulong)(8 * firstGroup)) + Vector512.Create(1UL, 2, 3, 4, 5, 6, 7, 8)) * golden);
+        Vector512<ulong> weylSecond = weylFirst + Vector512.Create(unchecked(8 * Mix64.Golden));
+        Vector512<ulong> step = Vector512.Create(unchecked(16 * Mix64.Golden));
+        Vector512<uint> byteMask = Vector512.Create(0xFFu);
+        Vector512<float> minusTwo = Vector512.Create(-2f);
+        for (int k = 0; k < steps; k++)
+        {
+            Vector512<ulong> bitsFirst = Mix64.Moremur(Mix64.SplitMix(weylFirst) ^ keys);
+            Vector512<ulong> bitsSecond = Mix64.Moremur(Mix64.SplitMix(weylSecond) ^ keys);
+            Vector512<uint> high = Vector512.Narrow(bitsFirst >> 32, bitsSecond >> 32);
+            Vector512<uint> low = Vector512.Narrow(bitsFirst, bitsSecond);
+            Vector512<int> middle = (((high & byteMask) << 8) | (low >> 24)).AsInt32();
+            Vector512<float> u = Vector512.FusedMultiplyAdd(
+                Vector512.ConvertToSingle((middle * 2) + Vector512<int>.One),
+                Vector512.Create(TwoToMinus40 / 2),
+                Vector512.ConvertToSingle((high >> 8).AsInt32()) * Vector512.Create(TwoToMinus24));
+            Vector512<float> r = Vector512.Sqrt(minusTwo * FastMathSingle.Log(u));
+            (Vector512<float> sin, Vector512<float> cos) = FastMathSingle.SinCosOfTurn((low & Vector512.Create(0xFFFFFFu)).AsInt32());
+            Vector512<float> cosines = r * cos, sines = r * sin;
+            nuint o = (nuint)(32 * k);
+            cosines.GetLower().StoreUnsafe(ref dst, o);
+            sines.GetLower().StoreUnsafe(ref dst, o + 8);
+            cosines.GetUpper().StoreUnsafe(ref dst, o + 16);
+            sines.GetUpper().StoreUnsafe(ref dst, o + 24);
+            weylFirst += step;
+            weylSecond += step;
+        }
+
+        return 32 * steps;
     }
 }

@@ -57,11 +57,12 @@ internal sealed class SimulationSetup
     public const int EpochsPerBatch = 8;
 
     /// <summary>
-    /// Trials per vector of the kernel (Vector256 of float) and of the user-level normal generator
-    /// (eight Box-Muller halves). Blocks are padded to a multiple of it so no user-level normal falls
-    /// to the generator's slower scalar tail.
+    /// Trials per vector of the kernel's wide path (Vector512 of float; the narrow path takes 8) and a
+    /// whole group of the user-level normal generator (sixteen Box-Muller halves). Blocks are padded to
+    /// a multiple of it so either path has whole vectors and no user-level normal falls to the
+    /// generator's slower scalar tail.
     /// </summary>
-    public const int NormalBatch = 8;
+    public const int NormalBatch = 16;
     public double StartRotationAngleRad { get; }
     public AreaWeights Weights { get; }
     public IReadOnlyList<Tile> Tiles { get; }

@@ -163,7 +163,6 @@ internal sealed class TileKernel
         s.RoundForTrialLoop();
 
         int trials = work.BlockTrials;
-        int lanes = (trials + SimulationSetup.NormalBatch - 1) / SimulationSetup.NormalBatch * SimulationSetup.NormalBatch;
         long geometryEnd = clock is null ? 0 : StageClock.Now;
         long normalsEnd = geometryEnd;
         long sketchesBefore = clock?.Sketches ?? 0;
@@ -174,7 +173,7 @@ internal sealed class TileKernel
         else
         {
             bool vector = _simd && TrialSampler.VectorPathAvailable;
-            FillUserNormals(_seed, work.Epoch, cell.Index, work.FirstTrial, vector ? lanes : trials, s);
+            FillUserNormals(_seed, work.Epoch, cell.Index, work.FirstTrial, vector ? TrialSampler.VectorLanes(trials, s) : trials, s);
             normalsEnd = clock is null ? 0 : StageClock.Now;
             if (vector)
             {

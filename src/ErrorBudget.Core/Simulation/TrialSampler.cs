@@ -28,14 +28,49 @@ internal static class TrialSampler
 {
     public static bool VectorPathAvailable => Vector256.IsHardwareAccelerated;
 
+    /// <summary>Sixteen trials per Vector512 of float where the hardware accelerates it.</summary>
+    public static bool WidePathAvailable => Vector512.IsHardwareAccelerated;
+
     /// <summary>HPE and VPE at or below this go to the zero bucket (<see cref="SimulationSetup.PositionErrorResolutionMeters"/>).</summary>
     private const float Resolution = (float)SimulationSetup.PositionErrorResolutionMeters;
 
-    /// <summary>Trials per vector step.</summary>
+    /// <summary>Trials per vector step of the 256-bit path.</summary>
     public const int Lanes = 8;
 
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    /// <summary>Trials per vector step of the 512-bit path.</summary>
+    public const int WideLanes = 16;
+
+    /// <summary>
+    /// The vector path for a block: 512-bit when accelerated and the scratch's lanes hold the trials
+    /// rounded up to 16, else 256-bit. Both give the same bits.
+    /// </summary>
+    public static bool UsesWidePath(int trials, TileScratch s) =>
+        WidePathAvailable && RoundUp(trials, WideLanes) <= s.LaneCapacity;
+
+    /// <summary>The lanes <see cref="SampleVector"/> computes (and needs normals for): trials rounded up to its vector.</summary>
+    public static int VectorLanes(int trials, TileScratch s) => RoundUp(trials, UsesWidePath(trials, s) ? WideLanes : Lanes);
+
+    private static int RoundUp(int n, int multiple) => (n + multiple - 1) / multiple * multiple;
+
+    /// <summary>
+    /// The vector twin: <see cref="SampleWide"/> where <see cref="UsesWidePath"/>, else eight trials per
+    /// Vector256. Needs the normals of <see cref="VectorLanes"/> lanes.
+    /// </summary>
     public static void SampleVector(int m, int trials, float[] satErrors, CellAccumulator acc, long weight, TileScratch s)
+    {
+        if (UsesWidePath(trials, s))
+        {
+            SampleWide(m, trials, satErrors, acc, weight, s);
+        }
+        else
+        {
+            SampleNarrow(m, trials, satErrors, acc, weight, s);
+        }
+    }
+
+    /// <summary>Eight trials per Vector256 of float (lanes = trials rounded up to 8).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    internal static void SampleNarrow(int m, int trials, float[] satErrors, CellAccumulator acc, long weight, TileScratch s)
     {
         int stride = s.LaneCapacity;
         ref float err = ref MemoryMarshal.GetArrayDataReference(satErrors);
@@ -99,6 +134,75 @@ internal static class TrialSampler
         AddAll(acc, weight, s, trials);
     }
 
+    /// <summary>
+    /// Sixteen trials per Vector512 of float (lanes = trials rounded up to 16): <see cref="SampleNarrow"/>
+    /// at twice the width, operation for operation (no public generic vector interface to write it once).
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    internal static void SampleWide(int m, int trials, float[] satErrors, CellAccumulator acc, long weight, TileScratch s)
+    {
+        int stride = s.LaneCapacity;
+        ref float err = ref MemoryMarshal.GetArrayDataReference(satErrors);
+        ref float coef = ref MemoryMarshal.GetArrayDataReference(s.Coefficients);
+        ref float z = ref MemoryMarshal.GetArrayDataReference(s.Normals);
+        ReadOnlySpan<int> visible = s.Visible.AsSpan(0, m);
+        float[] l = s.CholeskySingle;
+        var l0 = Vector512.Create(l[0]);
+        var l3 = Vector512.Create(l[3]);
+        var l4 = Vector512.Create(l[4]);
+        var l6 = Vector512.Create(l[6]);
+        var l7 = Vector512.Create(l[7]);
+        var l8 = Vector512.Create(l[8]);
+        var inverseLnGamma = Vector512.Create((float)acc.Hpe.InverseLnGamma);
+        var minIndexable = Vector512.Create(Resolution);
+        ref int keysH = ref MemoryMarshal.GetArrayDataReference(s.KeysH);
+        ref int keysV = ref MemoryMarshal.GetArrayDataReference(s.KeysV);
+        var e0 = Vector512.Create(s.OffsetSingle[0]);
+        var n0 = Vector512.Create(s.OffsetSingle[1]);
+        var u0 = Vector512.Create(s.OffsetSingle[2]);
+        IntegrityScratch? values = s.Integrity;
+
+        for (int j = 0; j < trials; j += WideLanes)
+        {
+            var e = e0;
+            var n = n0;
+            var u = u0;
+            for (int i = 0; i < m; i++)
+            {
+                int b = visible[i] * 4 * stride + j;
+                var x0 = Vector512.LoadUnsafe(ref err, (nuint)b);
+                var x1 = Vector512.LoadUnsafe(ref err, (nuint)(b + stride));
+                var x2 = Vector512.LoadUnsafe(ref err, (nuint)(b + 2 * stride));
+                var x3 = Vector512.LoadUnsafe(ref err, (nuint)(b + 3 * stride));
+                ref float c = ref Unsafe.Add(ref coef, i * 8);
+                var range = Vector512.FusedMultiplyAdd(x0, Vector512.Create(c), x3);
+                range = Vector512.FusedMultiplyAdd(x1, Vector512.Create(Unsafe.Add(ref c, 1)), range);
+                range = Vector512.FusedMultiplyAdd(x2, Vector512.Create(Unsafe.Add(ref c, 2)), range);
+                e = Vector512.FusedMultiplyAdd(range, Vector512.Create(Unsafe.Add(ref c, 3)), e);
+                n = Vector512.FusedMultiplyAdd(range, Vector512.Create(Unsafe.Add(ref c, 4)), n);
+                u = Vector512.FusedMultiplyAdd(range, Vector512.Create(Unsafe.Add(ref c, 5)), u);
+            }
+
+            var z0 = Vector512.LoadUnsafe(ref z, (nuint)j);
+            var z1 = Vector512.LoadUnsafe(ref z, (nuint)(stride + j));
+            var z2 = Vector512.LoadUnsafe(ref z, (nuint)(2 * stride + j));
+            e = Vector512.FusedMultiplyAdd(l0, z0, e);
+            n = Vector512.FusedMultiplyAdd(l3, z0, Vector512.FusedMultiplyAdd(l4, z1, n));
+            u = Vector512.FusedMultiplyAdd(l6, z0, Vector512.FusedMultiplyAdd(l7, z1, Vector512.FusedMultiplyAdd(l8, z2, u)));
+            var hpe = Vector512.Sqrt(Vector512.FusedMultiplyAdd(e, e, n * n));
+            var vpe = Vector512.Abs(u);
+            VectorKeys512(hpe, inverseLnGamma, minIndexable).StoreUnsafe(ref keysH, (nuint)j);
+            VectorKeys512(vpe, inverseLnGamma, minIndexable).StoreUnsafe(ref keysV, (nuint)j);
+            if (values is not null)
+            {
+                StoreWide512(hpe, values.HpeValues, j);
+                StoreWide512(vpe, values.VpeValues, j);
+            }
+        }
+
+        AddAll(acc, weight, s, trials);
+    }
+
     /// <summary>Eight float values into a double buffer at [j ..] (the integrity comparisons run in double).</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static void StoreWide(Vector256<float> x, double[] destination, int j)
@@ -107,6 +211,16 @@ internal static class TrialSampler
         ref double d = ref MemoryMarshal.GetArrayDataReference(destination);
         lower.StoreUnsafe(ref d, (nuint)j);
         upper.StoreUnsafe(ref d, (nuint)(j + 4));
+    }
+
+    /// <summary>Sixteen float values into a double buffer at [j ..].</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static void StoreWide512(Vector512<float> x, double[] destination, int j)
+    {
+        (Vector512<double> lower, Vector512<double> upper) = Vector512.Widen(x);
+        ref double d = ref MemoryMarshal.GetArrayDataReference(destination);
+        lower.StoreUnsafe(ref d, (nuint)j);
+        upper.StoreUnsafe(ref d, (nuint)(j + 8));
     }
 
     /// <summary>The block's keys into the cell's sketches (weight 1) and the epoch share (area weight); padded lanes are left out.</summary>
@@ -147,6 +261,16 @@ internal static class TrialSampler
         var safe = Vector256.ConditionalSelect(positive, x, Vector256<float>.One);
         var k = Vector256.ConvertToInt32(Vector256.Ceiling(FastMathSingle.Log(safe) * inverseLnGamma));
         return Vector256.ConditionalSelect(positive.AsInt32(), k, Vector256.Create(DDSketch.ZeroKey));
+    }
+
+    /// <summary><see cref="VectorKeys"/> on sixteen lanes.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static Vector512<int> VectorKeys512(Vector512<float> x, Vector512<float> inverseLnGamma, Vector512<float> minIndexable)
+    {
+        var positive = Vector512.GreaterThan(x, minIndexable);
+        var safe = Vector512.ConditionalSelect(positive, x, Vector512<float>.One);
+        var k = Vector512.ConvertToInt32(Vector512.Ceiling(FastMathSingle.Log(safe) * inverseLnGamma));
+        return Vector512.ConditionalSelect(positive.AsInt32(), k, Vector512.Create(DDSketch.ZeroKey));
     }
 
     /// <summary>The scalar twin of <see cref="VectorKeys"/> (identical keys).</summary>

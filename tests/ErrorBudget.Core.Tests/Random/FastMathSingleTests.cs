@@ -84,4 +84,42 @@ public class FastMathSingleTests
             }
         }
     }
+
+    [Fact]
+    public void The_sixteen_lane_logarithm_gives_the_bits_of_the_scalar_one()
+    {
+        Assert.True(Vector512.IsHardwareAccelerated, "this machine accelerates Vector512 (REFERENCE.md)");
+        float[] x = LogArguments();
+        for (int i = 0; i + 16 <= x.Length; i += 16)
+        {
+            Vector512<float> got = FastMathSingle.Log(Vector512.Create(x.AsSpan(i, 16)));
+            for (int k = 0; k < 16; k++)
+            {
+                Assert.Equal(BitConverter.SingleToInt32Bits(FastMathSingle.Log(x[i + k])), BitConverter.SingleToInt32Bits(got[k]));
+            }
+        }
+    }
+
+    [Fact]
+    public void The_sixteen_lane_sine_and_cosine_give_the_bits_of_the_scalar_ones()
+    {
+        Assert.True(Vector512.IsHardwareAccelerated, "this machine accelerates Vector512 (REFERENCE.md)");
+        var lanes = new int[16];
+        for (int start = 0; start < (1 << 24); start += 16 * 4099)
+        {
+            for (int k = 0; k < 16; k++)
+            {
+                // Every quadrant in each vector: lane k is offset by (k mod 4) quarter turns.
+                lanes[k] = (start + k + ((k % 4) << 22)) & ((1 << 24) - 1);
+            }
+
+            (Vector512<float> sin, Vector512<float> cos) = FastMathSingle.SinCosOfTurn(Vector512.Create(lanes));
+            for (int k = 0; k < 16; k++)
+            {
+                (float s, float c) = FastMathSingle.SinCosOfTurn(lanes[k]);
+                Assert.Equal(BitConverter.SingleToInt32Bits(s), BitConverter.SingleToInt32Bits(sin[k]));
+                Assert.Equal(BitConverter.SingleToInt32Bits(c), BitConverter.SingleToInt32Bits(cos[k]));
+            }
+        }
+    }
 }

@@ -1,3 +1,4 @@
+using System.Runtime.Intrinsics;
 using ErrorBudget.Core.Random;
 using MathNet.Numerics.Distributions;
 
@@ -32,6 +33,30 @@ public class SingleNormalsTests
         for (int i = 0; i < length; i++)
         {
             Assert.Equal(BitConverter.SingleToInt32Bits(SingleNormals.OfTrial(key, firstTrial + i)), BitConverter.SingleToInt32Bits(filled[i]));
+        }
+    }
+
+    [Theory]
+    [InlineData(0, 112)]
+    [InlineData(0, 104)]
+    [InlineData(16, 31)]
+    [InlineData(3, 70)]
+    [InlineData(2032, 2064)]
+    [InlineData(48, 8)]
+    public void Every_vector_width_writes_the_same_bits(long firstTrial, int length)
+    {
+        Assert.True(Vector512.IsHardwareAccelerated, "this machine accelerates Vector512 (REFERENCE.md)");
+        ulong key = CounterRng.Key(8, RandomPurpose.UserLocal, 1, 7, 2);
+        var scalar = new float[length];
+        SingleNormals.Fill(key, firstTrial, scalar, 0);
+        foreach (int bits in new[] { 256, 512 })
+        {
+            var filled = new float[length];
+            SingleNormals.Fill(key, firstTrial, filled, bits);
+            for (int i = 0; i < length; i++)
+            {
+                Assert.Equal(BitConverter.SingleToInt32Bits(scalar[i]), BitConverter.SingleToInt32Bits(filled[i]));
+            }
         }
     }
 

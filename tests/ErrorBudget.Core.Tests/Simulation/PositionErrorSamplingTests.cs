@@ -94,18 +94,23 @@ public sealed class PositionErrorSamplingTests
     [Fact]
     public void The_vector_and_scalar_twins_fill_the_same_buckets()
     {
-        var (vector, _) = Sample(commonClock: false, localSigma: LocalSigma, seed: 99, simd: true);
+        Assert.True(TrialSampler.WidePathAvailable, "this machine accelerates Vector512 (REFERENCE.md)");
         var (scalar, _) = Sample(commonClock: false, localSigma: LocalSigma, seed: 99, simd: false);
-        Assert.Equal(scalar.Hpe.Count, vector.Hpe.Count);
-        // The same float operations in the same order (FMA, square root and the FastMathSingle logarithm
-        // are correctly rounded or bit-twinned): every bucket holds the same count.
-        for (int key = vector.Hpe.KeyOf(1e-4); key <= vector.Hpe.KeyOf(100); key++)
+        // Both vector widths (eight and sixteen trials per vector) against the scalar twin.
+        foreach (int bits in new[] { 256, 512 })
         {
-            Assert.Equal(scalar.Hpe.CountOf(key), vector.Hpe.CountOf(key));
-            Assert.Equal(scalar.Vpe.CountOf(key), vector.Vpe.CountOf(key));
-        }
+            var (vector, _) = Sample(commonClock: false, localSigma: LocalSigma, seed: 99, simd: true, vectorBits: bits);
+            Assert.Equal(scalar.Hpe.Count, vector.Hpe.Count);
+            // The same float operations in the same order (FMA, square root and the FastMathSingle logarithm
+            // are correctly rounded or bit-twinned): every bucket holds the same count.
+            for (int key = vector.Hpe.KeyOf(1e-4); key <= vector.Hpe.KeyOf(100); key++)
+            {
+                Assert.Equal(scalar.Hpe.CountOf(key), vector.Hpe.CountOf(key));
+                Assert.Equal(scalar.Vpe.CountOf(key), vector.Vpe.CountOf(key));
+            }
 
-        Assert.Equal(scalar.Vpe.ZeroCount, vector.Vpe.ZeroCount);
+            Assert.Equal(scalar.Vpe.ZeroCount, vector.Vpe.ZeroCount);
+        }
     }
 
     [Fact]
@@ -120,7 +125,8 @@ public sealed class PositionErrorSamplingTests
             for (int epoch = 2; epoch < 6; epoch++)
             {
                 TileKernel.FillUserNormals(5, epoch, 0, 0, Trials, s);
-                TrialSampler.SampleVector(4, Trials, satErrors, acc, 3, s);
+                TrialSampler.SampleNarrow(4, Trials, satErrors, acc, 3, s);
+                TrialSampler.SampleWide(4, Trials, satErrors, acc, 3, s);
                 TrialSampler.SampleScalar(4, Trials, satErrors, acc, 3, s);
             }
         }
@@ -131,7 +137,7 @@ public sealed class PositionErrorSamplingTests
         Assert.Equal(0, GC.GetAllocatedBytesForCurrentThread() - before);
     }
 
-    private static (CellAccumulator Cell, TileScratch Scratch) Sample(bool commonClock, double localSigma, ulong seed, bool simd, bool removeCommon = true)
+    private static (CellAccumulator Cell, TileScratch Scratch) Sample(bool commonClock, double localSigma, ulong seed, bool simd, bool removeCommon = true, int vectorBits = 0)
     {
         const int m = 4;
         var s = new TileScratch(m, Trials, SketchAccuracy) { Integrity = new IntegrityScratch(Trials, 0) };
@@ -182,7 +188,12 @@ public sealed class PositionErrorSamplingTests
         if (simd)
         {
             Assert.True(TrialSampler.VectorPathAvailable, "this machine accelerates Vector256 (REFERENCE.md)");
-            TrialSampler.SampleVector(m, Trials, single, acc, 1, s);
+            switch (vectorBits)
+            {
+                case 256: TrialSampler.SampleNarrow(m, Trials, single, acc, 1, s); break;
+                case 512: TrialSampler.SampleWide(m, Trials, single, acc, 1, s); break;
+                default: TrialSampler.SampleVector(m, Trials, single, acc, 1, s); break;
+            }
         }
         else
         {
