@@ -35,9 +35,17 @@ public static class MonteCarloEngine
             cells[i] = new CellAccumulator(accuracy) { Integrity = integrity is null ? null : new IntegrityCellAccumulator(accuracy) };
         }
 
+        int threads = Math.Max(1, options.Threads);
+        // Every stage of the run (satellite errors, tile kernels, the relativity figures) shares one
+        // scheduler of `threads` slots, so --threads N uses N cores at most: a batch job can cap its
+        // CPU, and a one-thread run is the serial baseline of the parallel speedup (it used to borrow a
+        // second core for the satellite stage and the relativity figures).
+        TaskScheduler scheduler = new ConcurrentExclusiveSchedulerPair(TaskScheduler.Default, threads).ConcurrentScheduler;
+
         // Relativity figures (issue 4): deterministic, computed once from the scenario, alongside the
         // sampling (0.2 s on W1 that used to follow it).
-        var relativityTask = Task.Run(() => Relativity.RelativityAnalysis.Build(scenario, ct), ct);
+        var relativityTask = Task.Factory.StartNew(
+            () => Relativity.RelativityAnalysis.Build(scenario, ct), ct, TaskCreationOptions.None, scheduler);
         var kernel = new TileKernel(setup, cells, options.UseSimd, integrity);
         int batches = Math.Clamp(scenario.Batches, 1, setup.Trials);
         var sampler = new SatelliteErrorSampler(scenario, setup.Seed);
@@ -48,7 +56,6 @@ public static class MonteCarloEngine
         long done = 0;
         var compaction = new HeapCompaction();
         long satelliteTicks = 0;
-        int threads = Math.Max(1, options.Threads);
 
         var prepare = new TransformBlock<(int Epoch, int Block), EpochWork>(
             item =>
@@ -62,17 +69,17 @@ public static class MonteCarloEngine
                 return w;
             },
             // One epoch at a time, in order: satellite error processes (clocks) advance epoch by epoch.
-            new ExecutionDataflowBlockOptions { MaxDegreeOfParallelism = 1, BoundedCapacity = 2, CancellationToken = ct });
+            new ExecutionDataflowBlockOptions { MaxDegreeOfParallelism = 1, BoundedCapacity = 2, CancellationToken = ct, TaskScheduler = scheduler });
 
         // Epochs travel in small batches so a tile visits its users' cell sketches several epochs in a
         // row while they are still in cache.
         var batch = new BatchBlock<EpochWork>(
             SimulationSetup.EpochsPerBatch,
-            new GroupingDataflowBlockOptions { BoundedCapacity = 2 * SimulationSetup.EpochsPerBatch, CancellationToken = ct });
+            new GroupingDataflowBlockOptions { BoundedCapacity = 2 * SimulationSetup.EpochsPerBatch, CancellationToken = ct, TaskScheduler = scheduler });
 
         var split = new TransformManyBlock<EpochWork[], TileJob>(
             works => setup.Tiles.Select(t => new TileJob(works, t)),
-            new ExecutionDataflowBlockOptions { BoundedCapacity = 2, CancellationToken = ct });
+            new ExecutionDataflowBlockOptions { BoundedCapacity = 2, CancellationToken = ct, TaskScheduler = scheduler });
 
         var run = new ActionBlock<TileJob>(
             job =>
@@ -116,7 +123,12 @@ public static class MonteCarloEngine
 
                 scratchPool.Add(scratch);
             },
-            new ExecutionDataflowBlockOptions { MaxDegreeOfParallelism = threads, BoundedCapacity = threads * 2, CancellationToken = ct });
+            // One job per task: a worker gives its slot back after each job, so the satellite stage gets
+            // its turn in the shared scheduler's queue instead of waiting for the workers to run dry.
+            new ExecutionDataflowBlockOptions
+            {
+                MaxDegreeOfParallelism = threads, BoundedCapacity = threads * 2, MaxMessagesPerTask = 1, CancellationToken = ct, TaskScheduler = scheduler,
+            });
 
         var link = new DataflowLinkOptions { PropagateCompletion = true };
         prepare.LinkTo(batch, link);
