@@ -114,10 +114,17 @@ public sealed partial class DDSketch
         ReadOnlySpan<int> bases = batches.TrialBase;
         switch ((first.compact, all.compact))
         {
-            case (true, false): AddEachBatched(keys, first.narrow, a, (uint)firstWeight, all.wide, b, allWeight, c, bases, allWeight, batches); break;
-            case (false, false): AddEachBatched(keys, first.wide, a, firstWeight, all.wide, b, allWeight, c, bases, allWeight, batches); break;
-            case (true, true): AddEachBatched(keys, first.narrow, a, (uint)firstWeight, all.narrow, b, (uint)allWeight, c, bases, allWeight, batches); break;
-            case (false, true): AddEachBatched(keys, first.wide, a, firstWeight, all.narrow, b, (uint)allWeight, c, bases, allWeight, batches); break;
+            case (true, false): AddEachBatched(keys, first.narrow, a, (uint)firstWeight, all.wide, b, allWeight, c, bases, allWeight); break;
+            case (false, false): AddEachBatched(keys, first.wide, a, firstWeight, all.wide, b, allWeight, c, bases, allWeight); break;
+            case (true, true): AddEachBatched(keys, first.narrow, a, (uint)firstWeight, all.narrow, b, (uint)allWeight, c, bases, allWeight); break;
+            case (false, true): AddEachBatched(keys, first.wide, a, firstWeight, all.narrow, b, (uint)allWeight, c, bases, allWeight); break;
+        }
+
+        if (zeros > 0)
+        {
+            // Zero keys are rare (errors at or below the resolution): their batches in a pass of their own,
+            // which keeps the main pass's registers for its three stores.
+            AddZerosBatched(keys, batches, allWeight);
         }
 
         first.AddTotals(keys.Length, zeros, firstWeight);
@@ -125,9 +132,9 @@ public sealed partial class DDSketch
         batches.AddBlockTotals(allWeight);
     }
 
-    /// <summary>The pass of <see cref="AddKeysBatched"/> for one pair of first/all bucket types (zero keys go to their batch's zero bucket).</summary>
+    /// <summary>The pass of <see cref="AddKeysBatched"/> for one pair of first/all bucket types (zero keys are skipped).</summary>
     private static void AddEachBatched<TA, TB>(
-        ReadOnlySpan<int> keys, TA[] a, int aShift, TA aWeight, TB[] b, int bShift, TB bWeight, long[] c, ReadOnlySpan<int> cBase, long cWeight, BatchSketchSet batches)
+        ReadOnlySpan<int> keys, TA[] a, int aShift, TA aWeight, TB[] b, int bShift, TB bWeight, long[] c, ReadOnlySpan<int> cBase, long cWeight)
         where TA : unmanaged, IBinaryInteger<TA>
         where TB : unmanaged, IBinaryInteger<TB>
     {
@@ -135,18 +142,31 @@ public sealed partial class DDSketch
         ref TB b0 = ref MemoryMarshal.GetArrayDataReference(b);
         ref long c0 = ref MemoryMarshal.GetArrayDataReference(c);
         ref int base0 = ref MemoryMarshal.GetReference(cBase);
-        for (int j = 0; j < keys.Length; j++)
+        ref int key0 = ref MemoryMarshal.GetReference(keys);
+        nint aFrom = aShift, bFrom = bShift; // native-width offsets: one sign extension per key, not three
+        for (nint j = 0; j < keys.Length; j++)
         {
-            int key = keys[j];
+            int key = Unsafe.Add(ref key0, j);
             if (key != ZeroKey)
             {
-                Unsafe.Add(ref a0, key - aShift) += aWeight;
-                Unsafe.Add(ref b0, key - bShift) += bWeight;
-                Unsafe.Add(ref c0, Unsafe.Add(ref base0, j) + key) += cWeight;
+                nint k = key;
+                Unsafe.Add(ref a0, k - aFrom) += aWeight;
+                Unsafe.Add(ref b0, k - bFrom) += bWeight;
+                Unsafe.Add(ref c0, k + Unsafe.Add(ref base0, j)) += cWeight;
             }
-            else
+        }
+    }
+
+    /// <summary>Each zero key's weight to the zero bucket of its trial's batch.</summary>
+    private static void AddZerosBatched(ReadOnlySpan<int> keys, BatchSketchSet batches, long weight)
+    {
+        long[] zeroCounts = batches.ZeroCounts;
+        ReadOnlySpan<int> trialBatch = batches.TrialBatch;
+        for (int j = 0; j < keys.Length; j++)
+        {
+            if (keys[j] == ZeroKey)
             {
-                batches.ZeroCounts[batches.TrialBatch[j]] += cWeight;
+                zeroCounts[trialBatch[j]] += weight;
             }
         }
     }
