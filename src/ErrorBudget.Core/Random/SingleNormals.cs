@@ -37,8 +37,8 @@ internal static class SingleNormals
         Vector512.IsHardwareAccelerated ? 512 : Vector256.IsHardwareAccelerated ? 256 : 0;
 
     /// <summary>
-    /// <see cref="Fill(ulong, long, Span{float})"/> with a chosen vector width: 512 (two groups per step,
-    /// then 256 for the last group and a half), 256, or 0 for the scalar form. Every width writes the
+    /// <see cref="Fill(ulong, long, Span{float})"/> with a chosen vector width: 512 (two groups per step),
+    /// 256 (one group per step), or 0 for the scalar form. Every width writes the
     /// same bits. Range: vectorBits in {0, 256, 512}, at most what the hardware accelerates.
     /// </summary>
     internal static void Fill(ulong key, long firstTrial, Span<float> destination, int vectorBits)
@@ -52,12 +52,9 @@ internal static class SingleNormals
                 i++;
             }
 
-            if (vectorBits == 512)
-            {
-                i += FillGroupPairs(key, (firstTrial + i) >> 4, destination[i..]);
-            }
-
-            i += FillGroups(key, (firstTrial + i) >> 4, destination[i..]);
+            i += vectorBits == 512
+                ? FillGroupPairs(key, (firstTrial + i) >> 4, destination[i..])
+                : FillGroups(key, (firstTrial + i) >> 4, destination[i..]);
         }
 
         for (; i < destination.Length; i++)
@@ -126,13 +123,16 @@ internal static class SingleNormals
     /// <summary>
     /// <see cref="FillGroups"/> two groups per step: the eight pairs of a group in one Vector512 of
     /// 64-bit draws, the 32 normals of two groups in two Vector512 of float (cosine and sine halves).
-    /// Writes whole pairs of groups only and returns the normals written (a multiple of 32); the
-    /// rest is left to <see cref="FillGroups"/>. Same operations per lane, so the same bits.
+    /// A last step that is not whole stores only its first 8, 16 or 24 normals (the halves that fall
+    /// inside the span); returns the normals written (a multiple of 8), so <see cref="FillGroups"/>
+    /// gets nothing and only a tail under 8 falls to the scalar form. Same operations per lane, so
+    /// the same bits.
     /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static int FillGroupPairs(ulong key, long firstGroup, Span<float> destination)
     {
-        int steps = destination.Length / 32;
+        int written = destination.Length / 8 * 8;
+        int steps = (written + 31) / 32;
         ref float dst = ref MemoryMarshal.GetReference(destination);
         Vector512<ulong> keys = Vector512.Create(key);
         Vector512<ulong> golden = Vector512.Create(Mix64.Golden);
@@ -156,15 +156,31 @@ internal static class SingleNormals
             Vector512<float> r = Vector512.Sqrt(minusTwo * FastMathSingle.Log(u));
             (Vector512<float> sin, Vector512<float> cos) = FastMathSingle.SinCosOfTurn((low & Vector512.Create(0xFFFFFFu)).AsInt32());
             Vector512<float> cosines = r * cos, sines = r * sin;
-            nuint o = (nuint)(32 * k);
-            cosines.GetLower().StoreUnsafe(ref dst, o);
-            sines.GetLower().StoreUnsafe(ref dst, o + 8);
-            cosines.GetUpper().StoreUnsafe(ref dst, o + 16);
-            sines.GetUpper().StoreUnsafe(ref dst, o + 24);
+            int o = 32 * k;
+            cosines.GetLower().StoreUnsafe(ref dst, (nuint)o);
+            if (o + 32 > written)
+            {
+                // The last, partial step: trials [o, written) in halves of 8.
+                if (o + 16 <= written)
+                {
+                    sines.GetLower().StoreUnsafe(ref dst, (nuint)(o + 8));
+                }
+
+                if (o + 24 <= written)
+                {
+                    cosines.GetUpper().StoreUnsafe(ref dst, (nuint)(o + 16));
+                }
+
+                break;
+            }
+
+            sines.GetLower().StoreUnsafe(ref dst, (nuint)(o + 8));
+            cosines.GetUpper().StoreUnsafe(ref dst, (nuint)(o + 16));
+            sines.GetUpper().StoreUnsafe(ref dst, (nuint)(o + 24));
             weylFirst += step;
             weylSecond += step;
         }
 
-        return 32 * steps;
+        return written;
     }
 }
