@@ -5,7 +5,7 @@ namespace ErrorBudget.Benchmarks;
 
 /// <summary>
 /// The counter-based normal generators on one block of normals: the double-precision one (satellite-level
-/// errors, ARAIM) and the single-precision one of the user-level normals, vector and scalar forms.
+/// errors, ARAIM) and the single-precision one of the user-level normals, vector (widest, and 256-bit) and scalar forms.
 /// </summary>
 [MemoryDiagnoser]
 public class NormalGeneratorBenchmarks
@@ -22,6 +22,10 @@ public class NormalGeneratorBenchmarks
 
     [Benchmark(OperationsPerInvoke = 1024)]
     public void VectorSingleNormals() => SingleNormals.Fill(_key, 0, _single);
+
+    /// <summary>The same fill held to eight lanes (the 512-bit path's twin, for machines that compare them).</summary>
+    [Benchmark(OperationsPerInvoke = 1024)]
+    public void Vector256SingleNormals() => SingleNormals.Fill(_key, 0, _single, 256);
 
     [Benchmark(OperationsPerInvoke = 1024)]
     public void ScalarSingleNormals()
