@@ -1,3 +1,4 @@
+using System.Runtime.Intrinsics;
 using ErrorBudget.Core.Numerics;
 
 namespace ErrorBudget.Core.Geometry;
@@ -74,9 +75,16 @@ public static partial class PositionSolution
             return false;
         }
 
-        // Lower triangles of GᵀWG (a..) and GᵀG (u..). With g = [−e, −n, −u, 1]: g3 = 1.
-        double a00 = 0, a10 = 0, a11 = 0, a20 = 0, a21 = 0, a22 = 0, a30 = 0, a31 = 0, a32 = 0, a33 = 0;
-        double u00 = 0, u10 = 0, u11 = 0, u20 = 0, u21 = 0, u22 = 0, u30 = 0, u31 = 0, u32 = 0;
+        // GᵀWG and GᵀG accumulated a row at a time in Vector256 (row r += (w g_r) g, lanes c = 0..3,
+        // g = [−e, −n, −u, 1]); each lane sees the products and sums of the scalar form in the same order
+        // (no fused multiply-add), so the lower triangles below hold the scalar form's bits.
+        var a0 = Vector256<double>.Zero;
+        var a1 = Vector256<double>.Zero;
+        var a2 = Vector256<double>.Zero;
+        var a3 = Vector256<double>.Zero;
+        var u0 = Vector256<double>.Zero;
+        var u1 = Vector256<double>.Zero;
+        var u2 = Vector256<double>.Zero;
         for (int i = 0; i < m; i++)
         {
             double w = weights[i];
@@ -87,15 +95,21 @@ public static partial class PositionSolution
 
             Vec3 los = lineOfSightEnu[i];
             double g0 = -los.X, g1 = -los.Y, g2 = -los.Z;
-            u00 += g0 * g0; u10 += g1 * g0; u11 += g1 * g1;
-            u20 += g2 * g0; u21 += g2 * g1; u22 += g2 * g2;
-            u30 += g0; u31 += g1; u32 += g2;
-
-            double w0 = w * g0, w1 = w * g1, w2 = w * g2;
-            a00 += w0 * g0; a10 += w1 * g0; a11 += w1 * g1;
-            a20 += w2 * g0; a21 += w2 * g1; a22 += w2 * g2;
-            a30 += w0; a31 += w1; a32 += w2; a33 += w;
+            var g = Vector256.Create(g0, g1, g2, 1.0);
+            u0 += Vector256.Create(g0) * g;
+            u1 += Vector256.Create(g1) * g;
+            u2 += Vector256.Create(g2) * g;
+            a0 += Vector256.Create(w * g0) * g;
+            a1 += Vector256.Create(w * g1) * g;
+            a2 += Vector256.Create(w * g2) * g;
+            a3 += Vector256.Create(w) * g;
         }
+
+        // Lower triangles of GᵀWG (a_rc from row r) and GᵀG (u_rc; u3c = Σ g_c is row c's lane 3).
+        double a00 = a0[0], a10 = a1[0], a11 = a1[1], a20 = a2[0], a21 = a2[1], a22 = a2[2];
+        double a30 = a3[0], a31 = a3[1], a32 = a3[2], a33 = a3[3];
+        double u00 = u0[0], u10 = u1[0], u11 = u1[1], u20 = u2[0], u21 = u2[1], u22 = u2[2];
+        double u30 = u0[3], u31 = u1[3], u32 = u2[3];
 
         Span<double> normal = stackalloc double[16];
 
@@ -118,18 +132,22 @@ public static partial class PositionSolution
             return false;
         }
 
-        // S = (GᵀWG)⁻¹ Gᵀ W, column i = wᵢ · cov · gᵢ.
+        // S = (GᵀWG)⁻¹ Gᵀ W, column i = wᵢ · cov · gᵢ: the four rows as the lanes of the covariance's
+        // columns, in the scalar form's order (((c_q0 g0 + c_q1 g1) + c_q2 g2) + c_q3) w.
+        var c0 = Vector256.Create(covariance[0], covariance[4], covariance[8], covariance[12]);
+        var c1 = Vector256.Create(covariance[1], covariance[5], covariance[9], covariance[13]);
+        var c2 = Vector256.Create(covariance[2], covariance[6], covariance[10], covariance[14]);
+        var c3 = Vector256.Create(covariance[3], covariance[7], covariance[11], covariance[15]);
+        Span<double> rows = projection[..(4 * m)];
         for (int i = 0; i < m; i++)
         {
             Vec3 los = lineOfSightEnu[i];
-            double w = weights[i];
-            double g0 = -los.X, g1 = -los.Y, g2 = -los.Z;
-            for (int q = 0; q < 4; q++)
-            {
-                int r = q * 4;
-                projection[(q * m) + i] =
-                    w * ((covariance[r] * g0) + (covariance[r + 1] * g1) + (covariance[r + 2] * g2) + covariance[r + 3]);
-            }
+            var column = ((((c0 * Vector256.Create(-los.X)) + (c1 * Vector256.Create(-los.Y))) + (c2 * Vector256.Create(-los.Z))) + c3)
+                * Vector256.Create(weights[i]);
+            rows[i] = column[0];
+            rows[m + i] = column[1];
+            rows[(2 * m) + i] = column[2];
+            rows[(3 * m) + i] = column[3];
         }
 
         dop = new Dop(
