@@ -25,6 +25,9 @@ public sealed class ElevationVarianceTable
         _values[Intervals + 1] = _values[Intervals];
     }
 
+    /// <summary>The tabulated variance at node i (sin el = i / Intervals; node Intervals + 1 repeats the last). Range: 0 .. Intervals + 1.</summary>
+    internal double Node(int i) => _values[i];
+
     /// <summary>Range variance, m^2, at sin(elevation). Range: [0, 1] (clamped).</summary>
     public double At(double sinElevation)
     {

@@ -23,8 +23,7 @@ internal sealed class TileKernel
     private readonly ServiceGrid _grid;
     private readonly CellAccumulator[] _cells;
     private readonly AreaWeights _weights;
-    private readonly ElevationVarianceTable _truthUser;
-    private readonly ElevationVarianceTable _assumedUser;
+    private readonly ElevationVariancePair _userVariances;
     private readonly double _assumedUreVariance;
     private readonly double _sinMask;
     private readonly double _prefilterSinMaskSquared;
@@ -44,8 +43,9 @@ internal sealed class TileKernel
         _grid = setup.Grid;
         _cells = cells;
         _weights = setup.Weights;
-        _truthUser = new ElevationVarianceTable(UserErrorModel.From(setup.Scenario.User));
-        _assumedUser = new ElevationVarianceTable(UserErrorModel.From(setup.Scenario.Assumed.User));
+        _userVariances = new ElevationVariancePair(
+            new ElevationVarianceTable(UserErrorModel.From(setup.Scenario.User)),
+            new ElevationVarianceTable(UserErrorModel.From(setup.Scenario.Assumed.User)));
         // The receiver's satellite-level sigma: the assumed URE, or sigma_URA for ARAIM (its weights are C_int^-1).
         double ure = integrity?.Spec.Method == Scenarios.ProtectionLevelMethod.Araim
             ? integrity.Spec.Araim.UraSigmaMeters
@@ -285,11 +285,11 @@ internal sealed class TileKernel
     {
         for (int i = 0; i < m; i++)
         {
-            double sinEl = s.SinElevation[i];
-            double assumed = _assumedUreVariance + _assumedUser.At(sinEl);
+            _userVariances.At(s.SinElevation[i], out double truth, out double assumedUser);
+            double assumed = _assumedUreVariance + assumedUser;
             s.IntegrityVariance[i] = assumed;
             s.Weights[i] = 1.0 / assumed;
-            s.TruthVariance[i] = _truthUser.At(sinEl);
+            s.TruthVariance[i] = truth;
         }
 
         return PositionSolution.TrySolve(

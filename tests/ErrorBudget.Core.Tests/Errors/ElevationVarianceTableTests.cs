@@ -29,4 +29,20 @@ public sealed class ElevationVarianceTableTests
         // The promise in the table's documentation (linear interpolation of a smooth function).
         Assert.True(worst <= 5e-4, $"worst relative error {worst:E2}");
     }
+
+    [Fact]
+    public void The_interleaved_pair_gives_the_bits_of_its_two_tables()
+    {
+        var truth = new ElevationVarianceTable(UserErrorModel.From(new UserEnvironmentSpec(IonosphereMode.SingleFrequency, 2.0, FrequencyPair.L1L5, 0.12, MultipathModel.Airborne, 0.36)));
+        var assumed = new ElevationVarianceTable(UserErrorModel.From(new UserEnvironmentSpec(IonosphereMode.DualFrequency, 1.0, FrequencyPair.L1L5, 0.2, MultipathModel.Ground, 0.5)));
+        var pair = new ElevationVariancePair(truth, assumed);
+        // Every node, points between nodes, both ends and values outside [0, 1] (clamped).
+        var points = Enumerable.Range(0, 40_001).Select(k => k / 40_000.0).Concat([-0.5, 1.5, 1.0 - 1e-17, double.Epsilon]);
+        foreach (double sinEl in points)
+        {
+            pair.At(sinEl, out double t, out double a);
+            Assert.Equal(BitConverter.DoubleToInt64Bits(truth.At(sinEl)), BitConverter.DoubleToInt64Bits(t));
+            Assert.Equal(BitConverter.DoubleToInt64Bits(assumed.At(sinEl)), BitConverter.DoubleToInt64Bits(a));
+        }
+    }
 }
