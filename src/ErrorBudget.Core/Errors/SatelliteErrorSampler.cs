@@ -52,6 +52,9 @@ public sealed class SatelliteErrorSampler
     private readonly FaultInjector? _faults;
     private ulong[] _orbitKeyStates = [];   // per trial of the block: key state after (seed, orbit, trial, epoch)
     private ulong[] _clockKeyStates = [];   // per trial of the block: key state after (seed, clock, trial)
+    private ulong[] _keys = [];             // per trial: one satellite's finished keys
+    private double[] _orbitNormals = [];    // [k * lanes + j]: orbit normal k (radial, along, cross) of trial j
+    private double[] _clockNormals = [];    // [k * lanes + j]: clock normal k (offset, rate) of trial j
 
     public SatelliteErrorSampler(Scenario scenario, ulong seed)
     {
@@ -124,21 +127,26 @@ public sealed class SatelliteErrorSampler
         faulted.Clear();
         _clocks?.AdvanceTo(epoch, firstTrial, blockTrials);
         const double lightSpeed = PhysicalConstants.SpeedOfLight;
-        Span<double> z = stackalloc double[3];
-        Span<double> clockNormals = stackalloc double[2];
         // Key states after (seed, purpose, trial), once per trial of the block: each (satellite, trial)
-        // then finishes its keys with one or two absorptions instead of five (same keys, bit for bit).
-        if (_orbitKeyStates.Length < blockTrials)
+        // then finishes its keys with one or two absorptions instead of five (same keys, bit for bit),
+        // four trials at a time, and draws its normals in the same vectors (LaneNormals). The padded
+        // lanes past the block are computed and not used.
+        int lanes = (blockTrials + LaneNormals.Lanes - 1) / LaneNormals.Lanes * LaneNormals.Lanes;
+        if (_orbitKeyStates.Length < lanes)
         {
-            _orbitKeyStates = new ulong[blockTrials]; // once per run: blocks never grow
-            _clockKeyStates = new ulong[blockTrials];
+            _orbitKeyStates = new ulong[lanes]; // once per run: blocks never grow
+            _clockKeyStates = new ulong[lanes];
+            _keys = new ulong[lanes];
+            _orbitNormals = new double[3 * lanes];
+            _clockNormals = new double[2 * lanes];
         }
 
-        Span<ulong> orbitStates = _orbitKeyStates.AsSpan(0, blockTrials);
-        Span<ulong> clockStates = _clockKeyStates.AsSpan(0, blockTrials);
+        Span<ulong> orbitStates = _orbitKeyStates.AsSpan(0, lanes);
+        Span<ulong> clockStates = _clockKeyStates.AsSpan(0, lanes);
+        Span<ulong> keys = _keys.AsSpan(0, lanes);
         ulong orbitStart = CounterRng.KeyStart(_seed, RandomPurpose.SatelliteOrbit);
         ulong clockStart = CounterRng.KeyStart(_seed, RandomPurpose.SatelliteClock);
-        for (int j = 0; j < blockTrials; j++)
+        for (int j = 0; j < lanes; j++)
         {
             orbitStates[j] = CounterRng.KeyWithB(CounterRng.KeyWithA(orbitStart, firstTrial + j), epoch);
             clockStates[j] = CounterRng.KeyWithA(clockStart, firstTrial + j);
@@ -155,21 +163,28 @@ public sealed class SatelliteErrorSampler
             int bin = _ageOfData.BinOf(age);
             _ageOfData.AddEpoch(bin, age, GradedClockModel.RangeMeanSquare(_clock, age, _run.StepSeconds), blockTrials);
 
+            // Orbit normals 0..2 of Key(seed, orbit, trial, epoch, s); clock normals 0, 1 (one
+            // Box-Muller pair) of Key(seed, clock, trial, upload, s).
+            LaneNormals.FinishKeys(orbitStates, CounterRng.WordC(s), keys);
+            LaneNormals.FillHeads(keys, 3, _orbitNormals, lanes);
+            if (_clocks is null)
+            {
+                LaneNormals.FinishKeys(clockStates, CounterRng.WordB(upload), keys);
+                LaneNormals.FinishKeys(keys, CounterRng.WordC(s), keys);
+                LaneNormals.FillHeads(keys, 2, _clockNormals, lanes);
+            }
+
             for (int j = 0; j < blockTrials; j++)
             {
-                ulong orbitKey = CounterRng.KeyWithC(orbitStates[j], s); // Key(seed, orbit, trial, epoch, s)
-                CounterRng.FillNormalsScalar(orbitKey, 0, z);
-                double dr = _orbit.RadialSigmaMeters * z[0];
-                double da = _orbit.AlongSigmaMeters * z[1];
-                double dc = _orbit.CrossSigmaMeters * z[2];
+                double dr = _orbit.RadialSigmaMeters * _orbitNormals[j];
+                double da = _orbit.AlongSigmaMeters * _orbitNormals[lanes + j];
+                double dc = _orbit.CrossSigmaMeters * _orbitNormals[(2 * lanes) + j];
 
                 double clockRange;
                 if (_clocks is null)
                 {
-                    ulong clockKey = CounterRng.KeyWithC(CounterRng.KeyWithB(clockStates[j], upload), s); // Key(seed, clock, trial, upload, s)
-                    CounterRng.FillNormalsScalar(clockKey, 0, clockNormals); // Normal(key, 0) and (key, 1): one Box-Muller pair
-                    double offset = _clock.UploadSigmaMeters * clockNormals[0];
-                    double rate = _clock.GrowthSigmaMetersPerSecond * clockNormals[1];
+                    double offset = _clock.UploadSigmaMeters * _clockNormals[j];
+                    double rate = _clock.GrowthSigmaMetersPerSecond * _clockNormals[lanes + j];
                     clockRange = offset + rate * age;
                 }
                 else

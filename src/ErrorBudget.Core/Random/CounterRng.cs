@@ -61,8 +61,19 @@ public static class CounterRng
     public static ulong KeyWithC(ulong state, long c) => Absorb(state, unchecked((ulong)c), 5);
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static ulong Absorb(ulong h, ulong word, ulong position) =>
-        Mix64.Moremur(h ^ Mix64.SplitMix(unchecked(word + position * Mix64.Golden)));
+    private static ulong Absorb(ulong h, ulong word, ulong position) => Mix64.Moremur(h ^ Premix(word, position));
+
+    /// <summary>
+    /// Word b as <see cref="KeyWithB"/> absorbs it, pre-mixed: KeyWithB(state, b) =
+    /// Moremur(state xor WordB(b)), so a caller finishing many keys with the same word mixes it once.
+    /// </summary>
+    internal static ulong WordB(long b) => Premix(unchecked((ulong)b), 4);
+
+    /// <summary>Word c as <see cref="KeyWithC"/> absorbs it, pre-mixed (see <see cref="WordB"/>).</summary>
+    internal static ulong WordC(long c) => Premix(unchecked((ulong)c), 5);
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static ulong Premix(ulong word, ulong position) => Mix64.SplitMix(unchecked(word + position * Mix64.Golden));
 
     /// <summary>64 random bits number <paramref name="counter"/> of the stream <paramref name="key"/>.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
