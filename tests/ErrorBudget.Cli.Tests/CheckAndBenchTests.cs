@@ -52,6 +52,10 @@ public sealed class CheckAndBenchTests
 
         Assert.True(stages.GetProperty("geometry").GetDouble() > 0);
         Assert.InRange(root.GetProperty("parallel_efficiency").GetDouble(), 0.05, 1.5);
+        // Three alternating warm pairs by default, each with its own figure.
+        var byRound = root.GetProperty("parallel_efficiency_by_round").EnumerateArray().Select(e => e.GetDouble()).ToArray();
+        Assert.Equal(3, byRound.Length);
+        Assert.All(byRound, e => Assert.InRange(e, 0.05, 1.5));
         Assert.True(root.GetProperty("warm_user_solutions_per_second").GetDouble() > 0);
         Assert.True(root.GetProperty("araim_evaluate_us_per_user_epoch").GetDouble() > 0);
         Assert.True(root.GetProperty("araim_test_us_per_trial").GetDouble() > 0);
@@ -67,6 +71,18 @@ public sealed class CheckAndBenchTests
         var root = doc.RootElement;
         Assert.Equal(1, root.GetProperty("threads").GetInt32());
         Assert.Equal(JsonValueKind.Null, root.GetProperty("parallel_efficiency").ValueKind);
+        Assert.Empty(root.GetProperty("parallel_efficiency_by_round").EnumerateArray());
         Assert.True(root.GetProperty("warm_user_solutions_per_second").GetDouble() > 0);
+    }
+
+    [Theory]
+    [InlineData("0")]
+    [InlineData("21")]
+    public async Task Bench_refuses_a_round_count_out_of_range(string rounds)
+    {
+        var (code, stdout, err) = await CliRunner.RunAsync("bench", "--json", "--rounds", rounds);
+        Assert.Equal(2, code);
+        Assert.Contains($"--rounds {rounds} is out of range; allowed: 1 <= --rounds <= 20", err);
+        Assert.Equal("", stdout);
     }
 }

@@ -19,6 +19,7 @@ internal sealed record BenchFigures(
     [property: JsonPropertyName("araim_evaluate_us_per_user_epoch")] double AraimEvaluateMicroseconds,
     [property: JsonPropertyName("araim_test_us_per_trial")] double AraimTestMicroseconds,
     [property: JsonPropertyName("parallel_efficiency")] double? ParallelEfficiency,
+    [property: JsonPropertyName("parallel_efficiency_by_round")] IReadOnlyList<double> EfficiencyByRound,
     [property: JsonPropertyName("warm_user_solutions_per_second")] double WarmUserSolutionsPerSecond,
     [property: JsonPropertyName("stage_seconds")] BenchStages Stages);
 
@@ -39,4 +40,5 @@ internal sealed record BenchStages(
 
 [JsonSerializable(typeof(BenchFigures))]
 [JsonSerializable(typeof(BenchStages))]
+[JsonSerializable(typeof(IReadOnlyList<double>))]
 internal sealed partial class BenchJson : JsonSerializerContext;
