@@ -126,7 +126,8 @@ internal static class SingleNormals
     /// A last step that is not whole stores only its first 8, 16 or 24 normals (the halves that fall
     /// inside the span); returns the normals written (a multiple of 8), so <see cref="FillGroups"/>
     /// gets nothing and only a tail under 8 falls to the scalar form. Same operations per lane, so
-    /// the same bits.
+    /// the same bits. Software-pipelined: the next step's mixers are computed beside this step's
+    /// logarithm and sine/cosine (336 normals 824 -> 750 - 767 ns, alternating scratch runs, 2026-12-03).
     /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static int FillGroupPairs(ulong key, long firstGroup, Span<float> destination)
@@ -136,16 +137,21 @@ internal static class SingleNormals
         ref float dst = ref MemoryMarshal.GetReference(destination);
         Vector512<ulong> keys = Vector512.Create(key);
         Vector512<ulong> golden = Vector512.Create(Mix64.Golden);
-        // Weyl values key + (p + 1) Golden for pairs p = 8 g + 0..7 (group g) and 8 (g + 1) + 0..7.
         Vector512<ulong> weylFirst = keys + ((Vector512.Create((ulong)(8 * firstGroup)) + Vector512.Create(1UL, 2, 3, 4, 5, 6, 7, 8)) * golden);
         Vector512<ulong> weylSecond = weylFirst + Vector512.Create(unchecked(8 * Mix64.Golden));
         Vector512<ulong> step = Vector512.Create(unchecked(16 * Mix64.Golden));
         Vector512<uint> byteMask = Vector512.Create(0xFFu);
         Vector512<float> minusTwo = Vector512.Create(-2f);
+        // Software pipeline: the next step's mixers (a long chain of 64-bit multiplies) are issued beside
+        // this step's logarithm and sine/cosine, so the core always has two independent chains in its window.
+        Vector512<ulong> bitsFirst = Mix64.Moremur(Mix64.SplitMix(weylFirst) ^ keys);
+        Vector512<ulong> bitsSecond = Mix64.Moremur(Mix64.SplitMix(weylSecond) ^ keys);
         for (int k = 0; k < steps; k++)
         {
-            Vector512<ulong> bitsFirst = Mix64.Moremur(Mix64.SplitMix(weylFirst) ^ keys);
-            Vector512<ulong> bitsSecond = Mix64.Moremur(Mix64.SplitMix(weylSecond) ^ keys);
+            weylFirst += step;
+            weylSecond += step;
+            Vector512<ulong> nextFirst = Mix64.Moremur(Mix64.SplitMix(weylFirst) ^ keys);
+            Vector512<ulong> nextSecond = Mix64.Moremur(Mix64.SplitMix(weylSecond) ^ keys);
             Vector512<uint> high = Vector512.Narrow(bitsFirst >> 32, bitsSecond >> 32);
             Vector512<uint> low = Vector512.Narrow(bitsFirst, bitsSecond);
             Vector512<int> middle = (((high & byteMask) << 8) | (low >> 24)).AsInt32();
@@ -160,7 +166,6 @@ internal static class SingleNormals
             cosines.GetLower().StoreUnsafe(ref dst, (nuint)o);
             if (o + 32 > written)
             {
-                // The last, partial step: trials [o, written) in halves of 8.
                 if (o + 16 <= written)
                 {
                     sines.GetLower().StoreUnsafe(ref dst, (nuint)(o + 8));
@@ -177,10 +182,11 @@ internal static class SingleNormals
             sines.GetLower().StoreUnsafe(ref dst, (nuint)(o + 8));
             cosines.GetUpper().StoreUnsafe(ref dst, (nuint)(o + 16));
             sines.GetUpper().StoreUnsafe(ref dst, (nuint)(o + 24));
-            weylFirst += step;
-            weylSecond += step;
+            bitsFirst = nextFirst;
+            bitsSecond = nextSecond;
         }
 
         return written;
     }
+
 }
