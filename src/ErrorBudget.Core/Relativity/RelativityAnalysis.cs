@@ -87,23 +87,11 @@ public static class RelativityAnalysis
                 EccentricityTerm.AmplitudeSeconds(shell.Eccentricity, a),
                 frequency[s],
                 periodic[s],
-                user.SagnacMissed ? sagnac[s] : Zero(sagnac[s].Count),
-                user.ShapiroMissed ? shapiro[s] : Zero(shapiro[s].Count));
+                sagnac[s],   // zeros where the receiver applies the term (Visit)
+                shapiro[s]);
         }
 
         return new RelativityReport(rows, position.Figures(), sampled);
-    }
-
-    /// <summary>Statistics of an applied term: zero error at each of the pairs.</summary>
-    private static ErrorStatistics Zero(long count)
-    {
-        var z = default(ErrorStatistics);
-        for (long i = 0; i < count; i++)
-        {
-            z.Add(0.0);
-        }
-
-        return z;
     }
 
     /// <summary>Visits one (user, epoch): visible set, user-level terms per satellite, and dx = S eps.</summary>
@@ -148,10 +136,10 @@ public static class RelativityAnalysis
                     continue;
                 }
 
-                double sg = RelativisticUserBias.SagnacMeters(states[s].PositionEcef, origin);
-                double sh = RelativisticUserBias.ShapiroMeters(states[s].PositionEcef, origin);
-                sagnac[s].Add(sg);
-                shapiro[s].Add(sh);
+                // A term the receiver applies is reported as zero (Build), so only its count matters:
+                // the Shapiro logarithm was 1 % of W1's profile for figures nobody reads.
+                sagnac[s].Add(user.SagnacMissed ? RelativisticUserBias.SagnacMeters(states[s].PositionEcef, origin) : 0.0);
+                shapiro[s].Add(user.ShapiroMissed ? RelativisticUserBias.ShapiroMeters(states[s].PositionEcef, origin) : 0.0);
                 _los[m] = enu;
                 _weights[m] = 1.0 / (_assumedUre2 + _assumedUser.At(enu.Z));
                 _eps[m] = satelliteError[s] + user.RangeErrorMeters(states[s].PositionEcef, origin);
