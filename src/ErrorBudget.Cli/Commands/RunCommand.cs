@@ -73,7 +73,7 @@ internal static class RunCommand
         {
             var options = new RunOptions { Threads = threads, ToolVersion = CliApp.ToolVersion };
             RunResult result = exact
-                ? await ProgressDisplay.RunAsync(context, quiet, "exact percentiles", _ => Core.Exact.ExactEngine.RunAsync(scenario, options, ct)).ConfigureAwait(false)
+                ? await ProgressDisplay.RunAsync(context, quiet, "exact percentiles", progress => Core.Exact.ExactEngine.RunAsync(scenario, options with { Progress = progress }, ct)).ConfigureAwait(false)
                 : await ProgressDisplay.RunAsync(
                     context, quiet, "simulating", progress => MonteCarloEngine.RunAsync(scenario, options with { Progress = progress }, ct)).ConfigureAwait(false);
             await ResultSetWriter.WriteAsync(result, outDir.FullName, force, ct).ConfigureAwait(false);

@@ -38,11 +38,19 @@ public static class ExactEngine
         int epochs = c.Epochs;
         long trials = scenario.Run.Trials;
 
+        // Progress in mixture components handled (the cost of a quantile grows with them): a cell row
+        // has one per epoch, an epoch row one per cell, each of the eight service-area quantiles all.
+        long done = 0;
+        long everything = (long)c.Cells * epochs;
+        long total = (2 + GlobalSolves) * everything;
+        void Advance(long units) => options.Progress?.Invoke(Interlocked.Add(ref done, units), total);
+
         var cells = new CellResult[c.Cells];
         Parallel.For(0, c.Cells, new ParallelOptions { MaxDegreeOfParallelism = threads, CancellationToken = ct }, i =>
         {
             var members = Enumerable.Range(i * epochs, epochs).ToArray();
             cells[i] = CellRow(scenario, grid.Cells[i], c, members, trials);
+            Advance(epochs);
         });
 
         var epochRows = new EpochResult[epochs];
@@ -51,11 +59,12 @@ public static class ExactEngine
             var members = Enumerable.Range(0, c.Cells).Select(cell => (cell * epochs) + e).ToArray();
             var w = Enumerable.Range(0, c.Cells).Select(cell => (double)weights[cell]).ToArray();
             epochRows[e] = EpochRow(scenario, e, c, members, w, trials);
+            Advance(c.Cells);
         });
 
         var all = Enumerable.Range(0, c.Cells * epochs).ToArray();
         var allWeights = all.Select(k => (double)weights[k / epochs]).ToArray();
-        var global = Global(grid, c, cells, all, allWeights, trials, threads);
+        var global = Global(grid, c, cells, all, allWeights, trials, threads, () => Advance(everything), ct);
         clock.Stop();
         var metadata = new RunMetadata(
             MonteCarloEngine.HashOf(scenario.SourceText), scenario.Run.Seed, scenario.Run.Trials, options.ToolVersion, threads, started, clock.Elapsed.TotalSeconds);
@@ -111,12 +120,16 @@ public static class ExactEngine
             pdop.IsEmpty ? double.NaN : pdop.Quantile(0.50), pdop.IsEmpty ? double.NaN : pdop.Quantile(0.95), hpe, vpe);
     }
 
-    private static GlobalFigures Global(ServiceGrid grid, ExactComponents c, CellResult[] cells, int[] all, double[] weights, long trials, int threads)
+    /// <summary>Mixture quantiles solved for the service area: four levels of HPE and of VPE.</summary>
+    private const int GlobalSolves = 8;
+
+    private static GlobalFigures Global(
+        ServiceGrid grid, ExactComponents c, CellResult[] cells, int[] all, double[] weights, long trials, int threads, Action solvedOne, CancellationToken ct)
     {
         var solved = Enumerable.Range(0, all.Length).Where(j => !double.IsNaN(c.SigmaUp[all[j]])).ToArray();
         var members = solved.Select(j => all[j]).ToArray();
         var w = solved.Select(j => weights[j]).ToArray();
-        var (hpe, vpe) = Percentiles(c, members, w, threads);
+        var (hpe, vpe) = Percentiles(c, members, w, threads, solvedOne, ct);
         double unavailable = 0;
         for (int i = 0; i < cells.Length; i++)
         {
@@ -132,7 +145,8 @@ public static class ExactEngine
     }
 
     /// <summary>HPE and VPE percentiles of the mixture of the given components (weights null: equal).</summary>
-    private static (PercentileSet Hpe, PercentileSet Vpe) Percentiles(ExactComponents c, int[] members, double[]? weights, int threads = 1)
+    private static (PercentileSet Hpe, PercentileSet Vpe) Percentiles(
+        ExactComponents c, int[] members, double[]? weights, int threads = 1, Action? solved = null, CancellationToken ct = default)
     {
         if (members.Length == 0)
         {
@@ -157,7 +171,7 @@ public static class ExactEngine
             // A fixed split and a fixed order of the partial sums: the same answer for any scheduling.
             int parts = threads * 4;
             var partial = new double[parts];
-            Parallel.For(0, parts, new ParallelOptions { MaxDegreeOfParallelism = threads }, p =>
+            Parallel.For(0, parts, new ParallelOptions { MaxDegreeOfParallelism = threads, CancellationToken = ct }, p =>
             {
                 double sum = 0;
                 for (int j = p * members.Length / parts; j < (p + 1) * members.Length / parts; j++)
@@ -181,8 +195,10 @@ public static class ExactEngine
             h[q] = MixtureQuantile.Solve(
                 r => Weighted(j => GaussianPositionError.HorizontalCdf(r, c.Lambda1[members[j]], c.Lambda2[members[j]], nodes[j])),
                 p, Math.Sqrt(minL2) * rayleigh, Math.Sqrt(maxL1) * rayleigh);
+            solved?.Invoke();
             double half = MixtureQuantile.HalfNormal(p);
             v[q] = MixtureQuantile.Solve(r => Weighted(j => GaussianPositionError.VerticalCdf(r, c.SigmaUp[members[j]])), p, minU * half, maxU * half);
+            solved?.Invoke();
         }
 
         return (new PercentileSet(h[0], h[1], h[2], h[3]), new PercentileSet(v[0], v[1], v[2], v[3]));

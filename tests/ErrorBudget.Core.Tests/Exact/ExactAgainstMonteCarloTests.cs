@@ -96,6 +96,27 @@ public sealed class ExactAgainstMonteCarloTests(ITestOutputHelper output)
     }
 
     [Fact]
+    public async Task Service_area_tails_of_a_degenerate_constellation_agree_with_sampling()
+    {
+        // W1 with a 40 deg mask on a 10 deg grid: half the user-epochs have no solution and many of the
+        // others are elongated horizontal ellipses whose long axis is metres while the service-area
+        // bracket reaches tens of kilometres. The elongated CDF once lost all its nodes there (1e-78
+        // for a probability of 1), so the HPE p99.9 came back as the bracket's end: 65,356 m for
+        // 4,532 m, after 412 s (regression, 2026-12-03; now about 15 s). About 8.6e6 available samples:
+        // p99 and p99.9 are checked as in the theory above (3 batch-means standard errors + 0.5 %).
+        var w1 = Load("w1.toml", 100);
+        var scenario = w1 with { Grid = w1.Grid with { LatStepDeg = 10, LonStepDeg = 10, MaskDeg = 40 } };
+        var options = new RunOptions { Threads = 2 };
+        RunResult mc = await MonteCarloEngine.RunAsync(scenario, options, CancellationToken.None);
+        RunResult exact = await ExactEngine.RunAsync(scenario, options, CancellationToken.None);
+        for (int k = 2; k < 4; k++)
+        {
+            Check("HPE", k, Pick(mc.Global.Hpe, k), Pick(exact.Global.Hpe, k), mc.Intervals!.Hpe[k]);
+            Check("VPE", k, Pick(mc.Global.Vpe, k), Pick(exact.Global.Vpe, k), mc.Intervals!.Vpe[k]);
+        }
+    }
+
+    [Fact]
     public void Scenarios_that_need_sampling_are_refused_with_the_reason()
     {
         var faults = Load("integrity-faults.toml");

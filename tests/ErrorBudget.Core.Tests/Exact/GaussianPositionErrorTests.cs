@@ -28,7 +28,10 @@ public class GaussianPositionErrorTests
     public void The_chosen_node_count_matches_a_fine_reference(double lambda1, double lambda2)
     {
         int nodes = GaussianPositionError.NodesFor(lambda1, lambda2);
-        foreach (double scale in new[] { 1e-4, 1e-3, 0.01, 0.1, 0.5, 1, 2, 4 })
+        // Up to far beyond the long axis too: the exact path's brackets reach the largest component's
+        // quantile, tens of thousands of sigma1 of the smallest (a form that lost its nodes there once
+        // returned 2e-78 for a probability of 1).
+        foreach (double scale in new[] { 1e-4, 1e-3, 0.01, 0.1, 0.5, 1, 2, 4, 9.99, 10.01, 30, 1e3, 1e5 })
         {
             double r = scale * Math.Sqrt(lambda1);
             // The angular form with 2^20 midpoints resolves even the narrowest band here (width r / sqrt(lambda1) >= 1e-4).
@@ -61,6 +64,48 @@ public class GaussianPositionErrorTests
             double f = GaussianPositionError.HorizontalCdf(r, l1, l2, GaussianPositionError.NodesFor(l1, l2));
             double sd = Math.Sqrt(f * (1 - f) / N);
             Assert.True(Math.Abs(((double)inside / N) - f) <= (4.5 * sd) + 1e-12, $"r {r}: {(double)inside / N} vs {f}");
+        }
+    }
+
+    [Theory]
+    [InlineData(4.0, 0.02)]
+    [InlineData(4.0, 1e-9)]
+    [InlineData(1e4, 0.3)]
+    public void The_elongated_form_is_continuous_where_it_changes_variable(double lambda1, double lambda2)
+    {
+        // At r = 10 sigma1 the integral switches from x = r sin t to x itself: both sides must agree with
+        // the one function, to the rule's accuracy (1e-9 of probability here).
+        int nodes = GaussianPositionError.NodesFor(lambda1, lambda2);
+        Assert.Equal(GaussianPositionError.LineNodes, nodes);
+        double edge = 10 * Math.Sqrt(lambda1);
+        double below = GaussianPositionError.HorizontalCdf(edge * (1 - 1e-12), lambda1, lambda2, nodes);
+        double above = GaussianPositionError.HorizontalCdf(edge * (1 + 1e-12), lambda1, lambda2, nodes);
+        Assert.True(Math.Abs(above - below) <= 1e-9, $"{below:R} vs {above:R}");
+        Assert.Equal(1.0, GaussianPositionError.HorizontalCdf(35_000 * Math.Sqrt(lambda1), lambda1, lambda2, nodes), 12);
+    }
+
+    [Fact]
+    public void The_cdf_allocates_nothing()
+    {
+        // The exact path calls it for every component at every root-finding step (hundreds of millions of
+        // times on a large grid); MathNet's quadrature rule hands out a copy of its node arrays on every
+        // access, which once made each call of the elongated form allocate 68 KB.
+        foreach (var (l1, l2) in new[] { (1.0, 0.9), (30.0, 1.0), (1e6, 1.0) })
+        {
+            int nodes = GaussianPositionError.NodesFor(l1, l2);
+            foreach (double r in new[] { 0.5 * Math.Sqrt(l1), 50 * Math.Sqrt(l1) })
+            {
+                GaussianPositionError.HorizontalCdf(r, l1, l2, nodes); // first call: static tables
+                long before = GC.GetAllocatedBytesForCurrentThread();
+                double sum = 0;
+                for (int i = 0; i < 100; i++)
+                {
+                    sum += GaussianPositionError.HorizontalCdf(r, l1, l2, nodes);
+                }
+
+                Assert.Equal(0, GC.GetAllocatedBytesForCurrentThread() - before);
+                Assert.InRange(sum, 0, 100);
+            }
         }
     }
 
