@@ -157,7 +157,7 @@ public static class ExactEngine
         var nodes = members.Select(k => GaussianPositionError.NodesFor(c.Lambda1[k], c.Lambda2[k])).ToArray();
         double Weighted(Func<int, double> f)
         {
-            if (threads <= 1 || members.Length < 4096)
+            if (members.Length < 4096)
             {
                 double sum = 0;
                 for (int j = 0; j < members.Length; j++)
@@ -168,8 +168,9 @@ public static class ExactEngine
                 return sum / total;
             }
 
-            // A fixed split and a fixed order of the partial sums: the same answer for any scheduling.
-            int parts = threads * 4;
+            // A fixed split and a fixed order of the partial sums: the same answer for any scheduling and
+            // any thread count (the split used to be 4 x threads, so --threads moved the last bits).
+            const int parts = 16;
             var partial = new double[parts];
             Parallel.For(0, parts, new ParallelOptions { MaxDegreeOfParallelism = threads, CancellationToken = ct }, p =>
             {
