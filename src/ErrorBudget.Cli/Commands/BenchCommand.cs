@@ -21,8 +21,8 @@ internal static class BenchCommand
     private const string WorkloadName = "w1";
 
     /// <summary>
-    /// Warm pairs by default. On this shared host one pair's efficiency ranged from 0.63 to 1.07 within
-    /// minutes (2026-12-03); the median of three drops one disturbed pair.
+    /// Warm pairs by default. On this shared host single pairs ranged from 0.55 to 1.17 within an hour
+    /// (2026-12-03); the median of three drops one disturbed pair.
     /// </summary>
     private const int DefaultRounds = 3;
 

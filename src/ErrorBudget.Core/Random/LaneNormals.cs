@@ -15,7 +15,8 @@ namespace ErrorBudget.Core.Random;
 /// 2p and 2p + 1 of pair p = i / 2) and <see cref="FastMath256"/>'s logarithm and sine/cosine in place of
 /// Math's: within about 1e-13 of it (tests hold it). Every lane is computed by the same operations
 /// whatever its position, so a trial's normals do not depend on the block it falls in, and the result
-/// is the same on hardware without Vector256 (the software form of each operation rounds alike).
+/// should be the same on hardware without Vector256 (the software form of each operation is the same
+/// correctly rounded IEEE operation; not run on such hardware here).
 /// </remarks>
 internal static class LaneNormals
 {
