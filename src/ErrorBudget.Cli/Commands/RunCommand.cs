@@ -20,7 +20,7 @@ internal static class RunCommand
         var quiet = CommonOptions.Quiet();
         var exact = new Option<bool>("--exact")
         {
-            Description = "Compute the HPE/VPE percentiles exactly from the Gaussian position-error distributions instead of sampling (zero-mean Gaussian budgets only: no faults, graded clocks, upload jitter, relativistic biases or [integrity]).",
+            Description = "Compute the HPE/VPE percentiles exactly from the Gaussian position-error distributions instead of sampling (Gaussian budgets, with or without a relativistic bias: no faults, graded clocks, upload jitter or [integrity]).",
         };
         var command = new Command("run", "Run the scenario and write its result set (cells, epochs, relativity, clocks, age_of_data, availability, integrity and overbound Parquet tables, summary.json).")
         {

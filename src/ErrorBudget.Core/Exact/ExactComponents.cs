@@ -14,7 +14,11 @@ namespace ErrorBudget.Core.Exact;
 /// range-error variance sigma_i^2 = clock(age)^2 + orbit projected on the line of sight + user(el)^2
 /// (each satellite's errors independent of the others for one user), C = S diag(sigma^2) S^T in ENU,
 /// kept as the eigenvalues of its horizontal block and its vertical sigma. The geometry (mask, weights,
-/// S) is the sampling kernel's own step (<see cref="TileKernel.TrySolveGeometry"/>).
+/// S) is the sampling kernel's own step (<see cref="TileKernel.TrySolveGeometry"/>). A scenario that
+/// misses or mis-sets a relativistic term adds a deterministic range bias b_i per satellite (its clock
+/// term, as <see cref="Errors.SatelliteErrorSampler"/> adds it to every trial, and the user's missed Sagnac
+/// or Shapiro terms, as the kernel's common offset): the error's mean S b, kept along the horizontal
+/// block's eigenvectors and up.
 /// </summary>
 internal sealed class ExactComponents
 {
@@ -29,6 +33,9 @@ internal sealed class ExactComponents
         Pdop = new double[Cells * epochs];
         Hdop = new double[Cells * epochs];
         Vdop = new double[Cells * epochs];
+        MeanAlong = new double[Cells * epochs];
+        MeanAcross = new double[Cells * epochs];
+        MeanUp = new double[Cells * epochs];
     }
 
     public int Cells { get; }
@@ -43,6 +50,16 @@ internal sealed class ExactComponents
     public double[] Hdop { get; }
     public double[] Vdop { get; }
 
+    /// <summary>The mean horizontal error along the long and the short axis of the horizontal covariance, metres (0 without a bias).</summary>
+    public double[] MeanAlong { get; }
+    public double[] MeanAcross { get; }
+
+    /// <summary>The mean vertical error, metres (0 without a bias).</summary>
+    public double[] MeanUp { get; }
+
+    /// <summary>True when some (cell, epoch) has a non-zero mean.</summary>
+    public bool HasMeans { get; private set; }
+
     public static ExactComponents Build(Scenario scenario, ServiceGrid grid, int threads, CancellationToken ct)
     {
         int epochs = scenario.Run.Epochs;
@@ -53,6 +70,9 @@ internal sealed class ExactComponents
         var schedule = new UploadSchedule(scenario, scenario.Run.Seed);
         var works = new EpochWork[epochs];
         var clockVariance = new double[epochs * satellites];
+        var clockBias = new double[epochs * satellites];
+        var relativity = new Relativity.RelativisticClockError(scenario);
+        var userBias = new Relativity.RelativisticUserBias(scenario.Relativity);
         var frames = new (Vec3 R, Vec3 A, Vec3 C)[epochs * satellites];
         double u2 = scenario.Clock.UploadSigmaMeters * scenario.Clock.UploadSigmaMeters;
         double g2 = scenario.Clock.GrowthSigmaMetersPerSecond * scenario.Clock.GrowthSigmaMetersPerSecond;
@@ -71,6 +91,9 @@ internal sealed class ExactComponents
                 schedule.AgeOfData(s, t, out _, out double age);
                 // The simple clock model: offset N(0, upload^2) + rate N(0, growth^2) x age (SatelliteErrorSampler).
                 clockVariance[(e * satellites) + s] = u2 + (g2 * age * age);
+                clockBias[(e * satellites) + s] = relativity.IsActive
+                    ? relativity.ClockRangeErrorMeters(s, age, t, w.States[s].EccentricAnomalyRad)
+                    : 0.0;
             }
         }
 
@@ -102,6 +125,8 @@ internal sealed class ExactComponents
                         + (orbit.AlongSigmaMeters * orbit.AlongSigmaMeters * ua * ua)
                         + (orbit.CrossSigmaMeters * orbit.CrossSigmaMeters * uc * uc);
                     b.Variance[k] = clockVariance[(e * satellites) + sat] + orbitVariance + s.TruthVariance[k];
+                    b.Bias[k] = clockBias[(e * satellites) + sat]
+                        + (userBias.IsActive ? userBias.RangeErrorMeters(works[e].States[sat].PositionEcef, cell.Frame.Origin) : 0.0);
                 }
 
                 PositionSolution.ProjectCovariance(s.Projection.AsSpan(0, 4 * m), m, b.Variance.AsSpan(0, m), b.Covariance3);
@@ -112,10 +137,27 @@ internal sealed class ExactComponents
                 result.Pdop[i] = dop.Pdop;
                 result.Hdop[i] = dop.Hdop;
                 result.Vdop[i] = dop.Vdop;
+                if (relativity.IsActive || userBias.IsActive)
+                {
+                    // Mean = S b (rows E, N, U of S; a bias common to every satellite moves only the clock).
+                    double me = 0, mn = 0, mu = 0;
+                    for (int k = 0; k < m; k++)
+                    {
+                        me += s.Projection[k] * b.Bias[k];
+                        mn += s.Projection[m + k] * b.Bias[k];
+                        mu += s.Projection[(2 * m) + k] * b.Bias[k];
+                    }
+
+                    var (along, across) = GaussianPositionError.MeanInEigenFrame(b.Covariance3[0], b.Covariance3[1], b.Covariance3[4], me, mn);
+                    result.MeanAlong[i] = along;
+                    result.MeanAcross[i] = across;
+                    result.MeanUp[i] = mu;
+                }
             }
 
             return b;
         }, _ => { });
+        result.HasMeans = relativity.IsActive || userBias.IsActive;
         return result;
     }
 
@@ -123,6 +165,7 @@ internal sealed class ExactComponents
     {
         public TileScratch Scratch { get; } = new(satellites, SimulationSetup.NormalBatch, SimulationSetup.SketchAccuracy);
         public double[] Variance { get; } = new double[satellites];
+        public double[] Bias { get; } = new double[satellites];
         public double[] Covariance3 { get; } = new double[9];
     }
 }

@@ -3,9 +3,9 @@ using ErrorBudget.Core.Scenarios;
 namespace ErrorBudget.Core.Exact;
 
 /// <summary>
-/// Whether a scenario's budget is Gaussian with zero mean at every (epoch, user), so that the exact
-/// path applies: every truth error is a zero-mean Gaussian whose variance the geometry and the age of
-/// data fix. Anything else needs sampling.
+/// Whether a scenario's budget is Gaussian at every (epoch, user), so that the exact path applies: every
+/// truth error is a Gaussian whose variance the geometry and the age of data fix, plus a known bias (a
+/// relativistic term missed or mis-set, the same in every trial). Anything else needs sampling.
 /// </summary>
 public static class ExactEligibility
 {
@@ -31,11 +31,6 @@ public static class ExactEligibility
         if (scenario.Clock.UploadJitterSeconds > 0)
         {
             return "clock.upload_jitter_s makes the age of data random (a non-Gaussian mixture); run without --exact";
-        }
-
-        if (new Relativity.RelativisticClockError(scenario).IsActive || new Relativity.RelativisticUserBias(scenario.Relativity).IsActive)
-        {
-            return "[relativity] leaves a deterministic bias (a term missed or mis-set): the exact path covers zero-mean budgets; run without --exact";
         }
 
         return null;

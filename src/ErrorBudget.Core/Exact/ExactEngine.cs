@@ -7,8 +7,8 @@ using ErrorBudget.Core.Statistics;
 namespace ErrorBudget.Core.Exact;
 
 /// <summary>
-/// The exact path for zero-mean Gaussian budgets (issue 6): the position error of every (epoch, user)
-/// is a known Gaussian, so the per-cell, per-epoch and service-area percentiles of HPE and VPE are
+/// The exact path for Gaussian budgets (issue 6), a known bias included: the position error of every
+/// (epoch, user) is a known Gaussian with a known mean, so the per-cell, per-epoch and service-area percentiles of HPE and VPE are
 /// quantiles of known mixtures (equal weights over a cell's epochs; integer area weights over cells),
 /// found by root finding on the mixture CDF, with no sampling noise. Refused (see
 /// <see cref="ExactEligibility"/>) for budgets that need sampling.
@@ -193,12 +193,33 @@ public static class ExactEngine
         {
             double p = PercentileSet.Levels[q];
             double rayleigh = MixtureQuantile.Rayleigh(p);
-            h[q] = MixtureQuantile.Solve(
-                r => Weighted(j => GaussianPositionError.HorizontalCdf(r, c.Lambda1[members[j]], c.Lambda2[members[j]], nodes[j])),
-                p, Math.Sqrt(minL2) * rayleigh, Math.Sqrt(maxL1) * rayleigh);
-            solved?.Invoke();
             double half = MixtureQuantile.HalfNormal(p);
-            v[q] = MixtureQuantile.Solve(r => Weighted(j => GaussianPositionError.VerticalCdf(r, c.SigmaUp[members[j]])), p, minU * half, maxU * half);
+            if (!c.HasMeans)
+            {
+                h[q] = MixtureQuantile.Solve(
+                    r => Weighted(j => GaussianPositionError.HorizontalCdf(r, c.Lambda1[members[j]], c.Lambda2[members[j]], nodes[j])),
+                    p, Math.Sqrt(minL2) * rayleigh, Math.Sqrt(maxL1) * rayleigh);
+                solved?.Invoke();
+                v[q] = MixtureQuantile.Solve(r => Weighted(j => GaussianPositionError.VerticalCdf(r, c.SigmaUp[members[j]])), p, minU * half, maxU * half);
+                solved?.Invoke();
+                continue;
+            }
+
+            // With means the bracket still holds: a mean only moves probability out of a centred disc or
+            // interval (Anderson's theorem: P(|m + z| <= r) <= P(|z| <= r) for a centred Gaussian z, T. W.
+            // Anderson, Proc. AMS 6, 1955, from memory), and |m + z| <= |m| + |z| bounds each component's quantile above.
+            double upperH = members.Max(k => Math.Sqrt((c.MeanAlong[k] * c.MeanAlong[k]) + (c.MeanAcross[k] * c.MeanAcross[k])) + (Math.Sqrt(c.Lambda1[k]) * rayleigh));
+            h[q] = MixtureQuantile.Solve(
+                r => Weighted(j =>
+                {
+                    int k = members[j];
+                    return GaussianPositionError.HorizontalCdf(r, c.Lambda1[k], c.Lambda2[k], c.MeanAlong[k], c.MeanAcross[k], nodes[j]);
+                }),
+                p, Math.Sqrt(minL2) * rayleigh, upperH);
+            solved?.Invoke();
+            double upperV = members.Max(k => Math.Abs(c.MeanUp[k]) + (c.SigmaUp[k] * half));
+            v[q] = MixtureQuantile.Solve(
+                r => Weighted(j => GaussianPositionError.VerticalCdf(r, c.SigmaUp[members[j]], c.MeanUp[members[j]])), p, minU * half, upperV);
             solved?.Invoke();
         }
 

@@ -7,9 +7,9 @@ namespace ErrorBudget.Core.Exact;
 /// <summary>
 /// Distribution functions of the position error of one (epoch, user) when its ENU error is a zero-mean
 /// Gaussian: VPE = |U| is a folded (half-) normal, HPE = |(E, N)| the norm of a 2-D Gaussian with
-/// eigenvalues lambda1 &gt;= lambda2 of its covariance.
+/// eigenvalues lambda1 &gt;= lambda2 of its covariance. The forms with a mean are in the Offset part.
 /// </summary>
-internal static class GaussianPositionError
+internal static partial class GaussianPositionError
 {
     /// <summary>P(|U| &lt;= x) = erf(x / (sigma sqrt 2)) (half-normal; common practice), erf from <see cref="TaylorErf"/>.</summary>
     public static double VerticalCdf(double x, double sigma) =>
