@@ -53,6 +53,48 @@ public class OffsetPositionErrorTests
     }
 
     [Theory]
+    [InlineData(9.0, 1.0, 30.0, 0.0)]
+    [InlineData(9.0, 1.0, 0.0, 30.0)]
+    [InlineData(16.0, 0.25, 20.0, 15.0)]
+    [InlineData(100.0, 1.0, 5.0, 40.0)]
+    [InlineData(4.0, 4.0, 10.0, 10.0)]
+    [InlineData(1e4, 0.01, 300.0, 2.0)]
+    // Means across the short axis far beyond the spread: the short-axis window meets the disc's edge,
+    // where the chord (and so G) changes fastest; the panels follow G's scale there.
+    [InlineData(4.0, 4.0, 0.0, 200.0)]
+    [InlineData(1.0, 1.0, 0.5, 1000.0)]
+    [InlineData(100.0, 25.0, 0.0, 500.0)]
+    public void An_offset_ellipse_matches_the_other_conditioning(double lambda1, double lambda2, double m1, double m2)
+    {
+        // The reference conditions on the long axis instead (x ~ N(m1, lambda1), the chord across it
+        // sqrt(r^2 - x^2), P(|y| <= chord) from MathNet's normal CDF) and integrates with MathNet's
+        // adaptive Gauss-Kronrod: another order, another rule, another erf. Radii around the mean's
+        // distance, where the quantiles of such a component lie.
+        double s1 = Math.Sqrt(lambda1), s2 = Math.Sqrt(lambda2), distance = Math.Sqrt((m1 * m1) + (m2 * m2));
+        var across = new Normal(m2, s2);
+        foreach (double k in new[] { -3.0, -1.0, 0.0, 1.0, 3.0, 6.0 })
+        {
+            double r = distance + (k * s1);
+            if (r <= 0)
+            {
+                continue;
+            }
+
+            double lo = Math.Max(-r, m1 - (12 * s1)), hi = Math.Min(r, m1 + (12 * s1));
+            double expected = lo >= hi ? 0.0 : Integrate.GaussKronrod(
+                x =>
+                {
+                    double chord = Math.Sqrt(Math.Max(0.0, (r * r) - (x * x)));
+                    return Math.Exp(-0.5 * Math.Pow((x - m1) / s1, 2)) / (s1 * Math.Sqrt(2 * Math.PI))
+                        * (across.CumulativeDistribution(chord) - across.CumulativeDistribution(-chord));
+                },
+                lo, hi, 1e-13, 25, order: 61);
+            double actual = GaussianPositionError.HorizontalCdf(r, lambda1, lambda2, m1, m2, GaussianPositionError.NodesFor(lambda1, lambda2));
+            Assert.True(Math.Abs(actual - expected) < 1e-9, $"r {r}: {actual} vs {expected}");
+        }
+    }
+
+    [Theory]
     [InlineData(30.0)]
     [InlineData(300.0)]
     public void A_line_with_an_offset_across_it_is_the_folded_normal_of_the_chord(double r)
@@ -113,6 +155,46 @@ public class OffsetPositionErrorTests
             double tiny = GaussianPositionError.HorizontalCdf(r, lambda1, lambda2, 2e-5 * Math.Sqrt(lambda2), 0.0, nodes);
             Assert.True(Math.Abs(zero - tiny) < tolerance, $"r {r}: {tiny} vs {zero}");
         }
+    }
+
+    [Fact]
+    public void The_vector_and_scalar_offset_forms_agree()
+    {
+        // Four nodes per Vector256 (exp and the gathered erf table) against one at a time: the same sum
+        // up to the vector exp's rounding.
+        Assert.True(GaussianPositionError.UseVectorOffsetForm, "this machine has AVX2 (REFERENCE.md)");
+        var cases = new (double L1, double L2, double M1, double M2)[] { (9, 2, 25, 15), (16, 1, 5, 30), (4, 3, 30, 1), (1e4, 0.01, 300, 2), (4, 4, 0, 200) };
+        try
+        {
+            foreach (var (l1, l2, m1, m2) in cases)
+            {
+                double d = Math.Sqrt((m1 * m1) + (m2 * m2));
+                foreach (double k in new[] { -2.0, -0.5, 0.0, 0.7, 2.0 })
+                {
+                    double r = d + (k * Math.Sqrt(l1));
+                    GaussianPositionError.UseVectorOffsetForm = true;
+                    double vector = GaussianPositionError.HorizontalCdf(r, l1, l2, m1, m2, 16);
+                    GaussianPositionError.UseVectorOffsetForm = false;
+                    double scalar = GaussianPositionError.HorizontalCdf(r, l1, l2, m1, m2, 16);
+                    Assert.True(Math.Abs(vector - scalar) < 1e-14, $"r {r}: {vector} vs {scalar}");
+                }
+            }
+        }
+        finally
+        {
+            GaussianPositionError.UseVectorOffsetForm = TaylorErf.VectorAvailable;
+        }
+    }
+
+    [Fact]
+    public void Far_from_the_mean_the_answer_is_zero_or_one()
+    {
+        // 10 sigma1 either side of the mean's distance: exactly 0 and 1 (the mass left out is below 2e-22).
+        Assert.Equal(0.0, GaussianPositionError.HorizontalCdf(50.0 - 30.01, 9.0, 1.0, 30.0, 40.0, 16));
+        Assert.Equal(1.0, GaussianPositionError.HorizontalCdf(50.0 + 30.01, 9.0, 1.0, 30.0, 40.0, 16));
+        // Just inside, the quadrature's own value: within 1e-15 of the same limits.
+        Assert.True(GaussianPositionError.HorizontalCdf(50.0 - 29.0, 9.0, 1.0, 30.0, 40.0, 16) < 1e-15);
+        Assert.True(GaussianPositionError.HorizontalCdf(50.0 + 29.0, 9.0, 1.0, 30.0, 40.0, 16) > 1 - 1e-15);
     }
 
     [Fact]

@@ -1,4 +1,5 @@
 using ErrorBudget.Core.Exact;
+using System.Runtime.Intrinsics;
 using MathNet.Numerics;
 
 namespace ErrorBudget.Core.Tests.Exact;
@@ -60,6 +61,27 @@ public class TaylorErfTests
         Assert.True(double.IsNaN(TaylorErf.Of(double.NaN)));
         // Just below the saturation the table gives 1 - erfc(6) = 1 - 2.2e-17, which rounds to 1 as well.
         Assert.Equal(SpecialFunctions.Erf(Math.BitDecrement(6.0)), TaylorErf.Of(Math.BitDecrement(6.0)), 1e-16);
+    }
+
+    [Fact]
+    public void The_vector_form_gives_the_scalar_bits()
+    {
+        Assert.True(TaylorErf.VectorAvailable, "this machine has AVX2 (REFERENCE.md)");
+        var lanes = new double[4];
+        for (int k = -2000; k <= 2000; k++)
+        {
+            // Mixed lanes: inside the table, at the saturation and beyond, both signs.
+            double x = k * 0.00371;
+            var v = Vector256.Create(x, -x * 1.7, x + 6.0, x * 0.31);
+            TaylorErf.Of(v).CopyTo(lanes);
+            Assert.Equal(TaylorErf.Of(x), lanes[0]);
+            Assert.Equal(TaylorErf.Of(-x * 1.7), lanes[1]);
+            Assert.Equal(TaylorErf.Of(x + 6.0), lanes[2]);
+            Assert.Equal(TaylorErf.Of(x * 0.31), lanes[3]);
+        }
+
+        TaylorErf.Of(Vector256.Create(7.0, -8.0, 6.0, 100.0)).CopyTo(lanes);
+        Assert.Equal([1.0, -1.0, 1.0, 1.0], lanes);
     }
 
     [Fact]
