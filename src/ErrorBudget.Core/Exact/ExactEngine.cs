@@ -150,6 +150,13 @@ public static class ExactEngine
     {
         if (members.Length == 0)
         {
+            // Nothing to solve, but the progress still counts the solves (a run with no solution at all
+            // used to stop its bar short of 100 %).
+            for (int q = 0; q < 2 * PercentileSet.Levels.Length; q++)
+            {
+                solved?.Invoke();
+            }
+
             return (PercentileSet.Empty, PercentileSet.Empty);
         }
 

@@ -138,6 +138,25 @@ public sealed class ExactAgainstMonteCarloTests(ITestOutputHelper output)
     }
 
     [Fact]
+    public async Task Progress_reaches_its_total_even_without_any_solution()
+    {
+        // An 80 deg mask over W1 leaves no (epoch, user) with four satellites: no quantile is solved, and
+        // the progress must still end at its total (it once stopped at 20 %).
+        var w1 = Load("w1.toml");
+        var scenario = w1 with
+        {
+            Grid = w1.Grid with { LatStepDeg = 30, LonStepDeg = 30, MaskDeg = 80 },
+            Run = w1.Run with { DurationSeconds = 3600.0 },
+        };
+        long lastDone = -1, lastTotal = 0;
+        var options = new RunOptions { Threads = 2, Progress = (done, total) => { lock (scenario) { lastDone = Math.Max(lastDone, done); lastTotal = total; } } };
+        RunResult exact = await ExactEngine.RunAsync(scenario, options, CancellationToken.None);
+        Assert.True(double.IsNaN(exact.Global.Hpe.P95));
+        Assert.True(lastTotal > 0);
+        Assert.Equal(lastTotal, lastDone);
+    }
+
+    [Fact]
     public void Scenarios_that_need_sampling_are_refused_with_the_reason()
     {
         var faults = Load("integrity-faults.toml");
