@@ -57,9 +57,6 @@ internal sealed class ExactComponents
     /// <summary>The mean vertical error, metres (0 without a bias).</summary>
     public double[] MeanUp { get; }
 
-    /// <summary>True when some (cell, epoch) has a non-zero mean.</summary>
-    public bool HasMeans { get; private set; }
-
     public static ExactComponents Build(Scenario scenario, ServiceGrid grid, int threads, CancellationToken ct)
     {
         int epochs = scenario.Run.Epochs;
@@ -157,7 +154,6 @@ internal sealed class ExactComponents
 
             return b;
         }, _ => { });
-        result.HasMeans = relativity.IsActive || userBias.IsActive;
         return result;
     }
 

@@ -8,8 +8,8 @@ namespace ErrorBudget.Core.Exact;
 
 /// <summary>
 /// The exact path for Gaussian budgets (issue 6), a known bias included: the position error of every
-/// (epoch, user) is a known Gaussian with a known mean, so the per-cell, per-epoch and service-area percentiles of HPE and VPE are
-/// quantiles of known mixtures (equal weights over a cell's epochs; integer area weights over cells),
+/// (epoch, user) is a known Gaussian with a known mean, so the per-cell, per-epoch and service-area
+/// percentiles of HPE and VPE are quantiles of known mixtures (equal weights over a cell's epochs; integer area weights over cells),
 /// found by root finding on the mixture CDF, with no sampling noise. Refused (see
 /// <see cref="ExactEligibility"/>) for budgets that need sampling.
 /// </summary>
@@ -192,8 +192,8 @@ public static class ExactEngine
             return partial.Sum() / total;
         }
 
-        double minL2 = members.Min(k => c.Lambda2[k]), maxL1 = members.Max(k => c.Lambda1[k]);
-        double minU = members.Min(k => c.SigmaUp[k]), maxU = members.Max(k => c.SigmaUp[k]);
+        double minL2 = members.Min(k => c.Lambda2[k]);
+        double minU = members.Min(k => c.SigmaUp[k]);
         var h = new double[PercentileSet.Levels.Length];
         var v = new double[PercentileSet.Levels.Length];
         for (int q = 0; q < h.Length; q++)
@@ -201,20 +201,10 @@ public static class ExactEngine
             double p = PercentileSet.Levels[q];
             double rayleigh = MixtureQuantile.Rayleigh(p);
             double half = MixtureQuantile.HalfNormal(p);
-            if (!c.HasMeans)
-            {
-                h[q] = MixtureQuantile.Solve(
-                    r => Weighted(j => GaussianPositionError.HorizontalCdf(r, c.Lambda1[members[j]], c.Lambda2[members[j]], nodes[j])),
-                    p, Math.Sqrt(minL2) * rayleigh, Math.Sqrt(maxL1) * rayleigh);
-                solved?.Invoke();
-                v[q] = MixtureQuantile.Solve(r => Weighted(j => GaussianPositionError.VerticalCdf(r, c.SigmaUp[members[j]])), p, minU * half, maxU * half);
-                solved?.Invoke();
-                continue;
-            }
-
-            // With means the bracket still holds: a mean only moves probability out of a centred disc or
-            // interval (Anderson's theorem: P(|m + z| <= r) <= P(|z| <= r) for a centred Gaussian z, T. W.
-            // Anderson, Proc. AMS 6, 1955, from memory), and |m + z| <= |m| + |z| bounds each component's quantile above.
+            // The brackets: without means, the smallest and largest component quantiles (the bounds below
+            // reduce to them bit for bit); a mean only moves probability out of a centred disc or interval
+            // (Anderson's theorem: P(|m + z| <= r) <= P(|z| <= r) for a centred Gaussian z; T. W. Anderson,
+            // Proc. AMS 6, 1955, from memory), and |m + z| <= |m| + |z| bounds each component's quantile above.
             double upperH = members.Max(k => Math.Sqrt((c.MeanAlong[k] * c.MeanAlong[k]) + (c.MeanAcross[k] * c.MeanAcross[k])) + (Math.Sqrt(c.Lambda1[k]) * rayleigh));
             h[q] = MixtureQuantile.Solve(
                 r => Weighted(j =>
