@@ -55,7 +55,16 @@ internal static partial class GaussianPositionError
     // AggressiveOptimization: under tiered compilation (the test host) this loop stayed slow for minutes
     // (relativity-two-shells --exact: 2 min against 18 s with the JIT's tiers off), as REFERENCE.md warns.
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public static double HorizontalCdf(double r, double lambda1, double lambda2, double m1, double m2, int nodes)
+    public static double HorizontalCdf(double r, double lambda1, double lambda2, double m1, double m2, int nodes) =>
+        HorizontalCdf(r, lambda1, lambda2, m1, m2, nodes, VectorOffsetForm);
+
+    /// <summary>
+    /// <see cref="HorizontalCdf(double, double, double, double, double, int)"/> with the panels' form chosen:
+    /// four nodes per Vector256 (needs <see cref="VectorOffsetForm"/> hardware) or one at a time. A
+    /// parameter, not a switch, so a test comparing the two cannot disturb runs beside it.
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    internal static double HorizontalCdf(double r, double lambda1, double lambda2, double m1, double m2, int nodes, bool vector)
     {
         if ((m1 * m1) + (m2 * m2) <= NegligibleMean * NegligibleMean * lambda2)
         {
@@ -109,7 +118,7 @@ internal static partial class GaussianPositionError
         // sin(c + d) and cos(c + d) by the addition formulas from each panel centre's.
         Span<double> sinD = stackalloc double[PanelNodes.Length];
         Span<double> cosD = stackalloc double[PanelNodes.Length];
-        if (UseVectorOffsetForm)
+        if (vector)
         {
             // Four offsets per Vector256.SinCos (the scalar calls were an eighth of the form's time).
             var halfStep = Vector256.Create(0.5 * h);
@@ -128,14 +137,14 @@ internal static partial class GaussianPositionError
             }
         }
 
-        double sum = UseVectorOffsetForm
+        double sum = vector
             ? OffsetPanelsVector(r, m1, m2, tLow, h, panels, inverseShort, longScale, sinD, cosD)
             : OffsetPanelsScalar(r, m1, m2, tLow, h, panels, inverseShort, longScale, sinD, cosD);
         return Math.Clamp(sum * 0.5 * h * inverseShort / Math.Sqrt(2.0 * Math.PI), 0.0, 1.0);
     }
 
-    /// <summary>Whether the offset form's panels run four nodes per Vector256 (AVX2 gathers for the erf table).</summary>
-    internal static bool UseVectorOffsetForm { get; set; } = TaylorErf.VectorAvailable && Vector256.IsHardwareAccelerated;
+    /// <summary>Whether the offset form's panels can run four nodes per Vector256 (AVX2 gathers for the erf table).</summary>
+    internal static readonly bool VectorOffsetForm = TaylorErf.VectorAvailable && Vector256.IsHardwareAccelerated;
 
     /// <summary>The panels' weighted sum, one node at a time (hardware without AVX2; the tests' reference for the vector form).</summary>
     private static double OffsetPanelsScalar(
